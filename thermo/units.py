@@ -1,0 +1,179 @@
+"""Units at the edge: one pint registry turns the strings a user types into SI floats.
+
+Inside co2routes every quantity is an SI float (K, Pa, kg, J, m3, s, kg/s, ...). Only this
+module knows about units. Each call names the field it parses so an error can say which input
+was wrong and what dimension was expected.
+
+>>> parse("160 psi", "pressure", "pressure")
+1103161.1...
+>>> parse("-4 degF", "temperature", "temperature")
+253.15
+>>> parse("31 %", "strength", "fraction")
+0.31
+"""
+
+from __future__ import annotations
+
+import math
+from functools import lru_cache
+
+from thermo.errors import InputError
+
+#: The dimensions a field may ask for, with the SI unit the value is returned in and the
+#: pint dimensionality it must have. "fraction" is dimensionless (``31 %`` -> 0.31).
+DIMENSIONS: dict[str, tuple[str, str]] = {
+    "temperature": ("kelvin", "[temperature]"),
+    "temperature_difference": ("delta_degC", "[temperature]"),
+    "pressure": ("pascal", "[mass] / [length] / [time] ** 2"),
+    "volume": ("meter ** 3", "[length] ** 3"),
+    "mass": ("kilogram", "[mass]"),
+    "length": ("meter", "[length]"),
+    "area": ("meter ** 2", "[length] ** 2"),
+    "time": ("second", "[time]"),
+    "energy": ("joule", "[length] ** 2 * [mass] / [time] ** 2"),
+    "power": ("watt", "[length] ** 2 * [mass] / [time] ** 3"),
+    "mass_flow": ("kilogram / second", "[mass] / [time]"),
+    "volume_flow": ("meter ** 3 / second", "[length] ** 3 / [time]"),
+    "density": ("kilogram / meter ** 3", "[mass] / [length] ** 3"),
+    "velocity": ("meter / second", "[length] / [time]"),
+    "fraction": ("dimensionless", "dimensionless"),
+    "heat_transfer_coefficient": ("watt / meter ** 2 / kelvin", "[mass] / [temperature] / [time] ** 3"),
+}
+
+#: A few examples per dimension, used in error messages.
+EXAMPLES: dict[str, str] = {
+    "temperature": "'20 degC', '293 K', '-4 degF'",
+    "temperature_difference": "'5 delta_degC', '5 K'",
+    "pressure": "'1 atm', '160 psi', '35 bar'",
+    "volume": "'10 gal', '47 L', '0.1 m**3'",
+    "mass": "'2 kg', '500 g', '5 lb'",
+    "length": "'0.1 m', '4 in'",
+    "area": "'0.5 m**2'",
+    "time": "'8 h', '3 day'",
+    "energy": "'5 kJ', '1 kWh'",
+    "power": "'1.5 kW'",
+    "mass_flow": "'2 kg/day', '10 g/h'",
+    "volume_flow": "'1 L/min', '2 m**3/h'",
+    "density": "'1.1 kg/L'",
+    "velocity": "'0.2 m/s'",
+    "fraction": "'31 %', '0.31'",
+    "heat_transfer_coefficient": "'0.5 W/m**2/K'",
+}
+
+
+@lru_cache(maxsize=1)
+def registry():
+    """The project's single pint registry (built on first use; pint is not on the start-up path)."""
+    import pint
+
+    ureg = pint.UnitRegistry(autoconvert_offset_to_baseunit=True)
+    ureg.define("ppmv = 1e-6 = ppm_v")
+    ureg.define("psig = 6894.757293168361 * pascal")  # treated as psi; gauge is said in the field help
+    return ureg
+
+
+def parse(text: str | float | int, field: str, dimension: str) -> float:
+    """Parse ``text`` (a number with units, e.g. ``"160 psi"``) and return the SI float.
+
+    Parameters
+    ----------
+    text : str
+        What the user typed. A bare number is accepted only for ``dimension="fraction"``.
+    field : str
+        The input's name, used in the error message.
+    dimension : str
+        One of :data:`DIMENSIONS`.
+
+    Raises
+    ------
+    InputError
+        Unknown unit, wrong dimension, a bare number where a unit is needed, or not finite.
+
+    >>> parse("10 gal", "volume", "volume")
+    0.0378541...
+    >>> parse("2 kg/day", "demand", "mass_flow")
+    2.31481...e-05
+    >>> parse("1 atm", "pressure", "pressure")
+    101325.0
+    """
+    if dimension not in DIMENSIONS:
+        raise ValueError(f"unknown dimension {dimension!r}")
+    si_unit, dims = DIMENSIONS[dimension]
+    want = f"a {dimension.replace('_', ' ')} with units, e.g. {EXAMPLES[dimension]}"
+    if isinstance(text, bool):
+        raise InputError(field, f"must be {want}", got=text)
+    if isinstance(text, (int, float)):
+        if dimension != "fraction":
+            raise InputError(field, f"must be {want}; a bare number has no unit", got=text)
+        value = float(text)
+    else:
+        raw = str(text).strip()
+        if not raw:
+            raise InputError(field, f"must be {want}", got="nothing")
+        ureg = registry()
+        try:
+            q = ureg.Quantity(raw.replace("°C", " degC").replace("°F", " degF").replace("°", " deg"))
+        except Exception:
+            raise InputError(field, f"must be {want}", got=repr(raw)) from None
+        if not isinstance(q, ureg.Quantity):
+            q = ureg.Quantity(q)
+        if q.dimensionless and not q.unitless:
+            pass  # "%" or "ppmv": a dimensionless quantity with a unit
+        elif q.unitless and dimension != "fraction":
+            raise InputError(field, f"must be {want}; a bare number has no unit", got=repr(raw))
+        if dimension == "temperature_difference":
+            ok = q.check("[temperature]")
+        else:
+            ok = q.check(dims) if dims != "dimensionless" else q.dimensionless
+        if not ok:
+            raise InputError(field, f"must be {want}", got=repr(raw))
+        try:
+            if dimension == "temperature":
+                value = float(q.to("kelvin").magnitude)
+            elif dimension == "temperature_difference":
+                value = _temperature_difference(q)
+            else:
+                value = float(q.to(si_unit).magnitude)
+        except Exception:
+            raise InputError(field, f"must be {want}", got=repr(raw)) from None
+    if not math.isfinite(value):
+        raise InputError(field, "must be a finite number", got=text)
+    return value
+
+
+def _temperature_difference(q) -> float:
+    """A temperature difference in kelvin; plain degC/degF are read as differences."""
+    ureg = registry()
+    unit = str(q.units)
+    if unit == "degree_Celsius":
+        return float(q.magnitude)
+    if unit == "degree_Fahrenheit":
+        return float(q.magnitude) * 5.0 / 9.0
+    return float(q.to(ureg.kelvin).magnitude) if unit == "kelvin" else float(
+        q.to(ureg.delta_degC).magnitude
+    )
+
+
+def parse_positive(text: str, field: str, dimension: str) -> float:
+    """Like :func:`parse` but the value must be greater than zero.
+
+    >>> parse_positive("47 L", "volume", "volume")
+    0.047
+    """
+    value = parse(text, field, dimension)
+    if not value > 0.0:
+        raise InputError(field, "must be greater than zero", got=text)
+    return value
+
+
+def to_unit(value_si: float, dimension: str, unit: str) -> float:
+    """Convert an SI float of ``dimension`` into ``unit`` (for display at the edge).
+
+    >>> round(to_unit(101325.0, "pressure", "bar"), 5)
+    1.01325
+    >>> round(to_unit(273.15, "temperature", "degC"), 6)
+    0.0
+    """
+    ureg = registry()
+    si_unit, _ = DIMENSIONS[dimension]
+    return float(ureg.Quantity(value_si, si_unit).to(unit).magnitude)

@@ -1,0 +1,88 @@
+"""The ``co2routes`` command line.
+
+With no verb it opens the interface on the demo scenario. Each verb lives in its own module under
+:mod:`tui.commands`; this module only wires them, prints their answer and turns a user's mistake
+into one line on stderr with exit status 2.
+"""
+
+from __future__ import annotations
+
+import argparse
+import importlib
+import sys
+from typing import Sequence
+
+from thermo.errors import InputError
+
+#: The verbs, in the order ``--help`` lists them; each is ``tui.commands.<module>``.
+COMMANDS: tuple[str, ...] = (
+    "saturation",
+    "store",
+    "snow",
+    "moisture",
+    "reaction",
+    "calcination",
+)
+
+PROG = "co2routes"
+
+
+class _Parser(argparse.ArgumentParser):
+    """An argument parser whose errors are one line and exit with status 2."""
+
+    def error(self, message: str) -> None:  # noqa: D401 - argparse hook
+        self.exit(2, f"{self.prog}: error: {' '.join(message.split())}\n")
+
+
+def build_parser() -> argparse.ArgumentParser:
+    """The full parser, with one sub-parser per verb."""
+    parser = _Parser(
+        prog=PROG,
+        description=(
+            "Plan a small CO2 supply: compare sourcing routes, plan a batch, size the dryer and "
+            "plan compression, storage and dry ice. With no command, opens the interface."
+        ),
+    )
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
+    for name in COMMANDS:
+        module = importlib.import_module(f"tui.commands.{name}")
+        p = sub.add_parser(module.NAME, help=module.HELP, description=module.HELP)
+        module.add_arguments(p)
+        if getattr(module, "WANTS_FORMAT_FLAGS", True):
+            p.add_argument("--json", action="store_true", help="print the answer as JSON (SI units)")
+        p.set_defaults(_module=module)
+    return parser
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    """Entry point of the ``co2routes`` console script; returns the exit status."""
+    argv = list(sys.argv[1:] if argv is None else argv)
+    parser = build_parser()
+    args = parser.parse_args(argv)
+    if args.command is None:
+        return _open_interface(None)
+    from tui.output import emit
+
+    try:
+        answer = args._module.run(args)
+        emit(answer, args, sys.stdout)
+    except InputError as err:
+        print(f"{PROG} {args.command}: error: {err}", file=sys.stderr)
+        return 2
+    except BrokenPipeError:
+        return 0
+    return 0
+
+
+def _open_interface(path: str | None) -> int:
+    """Open the terminal interface (or, until it exists, show the help)."""
+    try:
+        app_module = importlib.import_module("tui.app")
+    except ModuleNotFoundError:
+        build_parser().print_help()
+        return 0
+    return app_module.run_app(path)
+
+
+if __name__ == "__main__":  # pragma: no cover
+    sys.exit(main())

@@ -1,0 +1,147 @@
+"""Printing a command's answer: JSON, or a readable table whose units come from the key names.
+
+A key ends in its unit (``_pa``, ``_k``, ``_kg`` ...); the table shows the value in units a
+practitioner reads (bar and psi for pressure, degC for temperature) without the command having
+to format anything itself.
+"""
+
+from __future__ import annotations
+
+import json
+import math
+from typing import IO, Any
+
+from thermo.cautions import LOCAL_CODES
+
+# suffix -> (display unit, factor from SI, offset); checked longest first.
+_SUFFIXES: dict[str, tuple[str, float, float]] = {
+    "_kg_m3": ("kg/m³", 1.0, 0.0),
+    "_kg_l": ("kg/L", 1.0, 0.0),
+    "_kg_per_kg": ("kg/kg", 1.0, 0.0),
+    "_g_per_kg_co2": ("g/kg CO2", 1.0, 0.0),
+    "_kj_per_kg_co2": ("kJ/kg CO2", 1.0, 0.0),
+    "_kj_per_kg": ("kJ/kg", 1.0, 0.0),
+    "_kj_per_mol": ("kJ/mol", 1.0, 0.0),
+    "_kwh_per_kg": ("kWh/kg", 1.0, 0.0),
+    "_kg_per_cycle": ("kg/cycle", 1.0, 0.0),
+    "_per_kg_co2": ("per kg CO2", 1.0, 0.0),
+    "_per_kg": ("per kg", 1.0, 0.0),
+    "_m_s": ("m/s", 1.0, 0.0),
+    "_pa": ("bar", 1e-5, 0.0),
+    "_k": ("°C", 1.0, -273.15),
+    "_kg": ("kg", 1.0, 0.0),
+    "_kj": ("kJ", 1.0, 0.0),
+    "_kwh": ("kWh", 1.0, 0.0),
+    "_l": ("L", 1.0, 0.0),
+    "_m3": ("m³", 1.0, 0.0),
+    "_m": ("m", 1.0, 0.0),
+    "_h": ("h", 1.0, 0.0),
+    "_ppmv": ("ppmv", 1.0, 0.0),
+}
+
+
+def label_of(key: str) -> tuple[str, str]:
+    """Split a key into a human label and its display unit.
+
+    >>> label_of("vapor_density_kg_m3")
+    ('vapor density', 'kg/m³')
+    >>> label_of("phase")
+    ('phase', '')
+    """
+    for suffix in sorted(_SUFFIXES, key=len, reverse=True):
+        if key.endswith(suffix):
+            return key[: -len(suffix)].replace("_", " "), _SUFFIXES[suffix][0]
+    return key.replace("_", " "), ""
+
+
+def format_value(key: str, value: Any) -> str:
+    """Format one value for the table, converting SI to the display unit.
+
+    >>> format_value("pressure_pa", 6434244.25)
+    '64.34 bar (933.2 psi)'
+    >>> format_value("temperature_k", 298.15)
+    '25.00 °C (298.15 K)'
+    >>> format_value("cost_per_kg", None)
+    'unknown'
+    """
+    if value is None:
+        return "unknown"
+    if isinstance(value, bool):
+        return "yes" if value else "no"
+    if isinstance(value, (int, float)):
+        for suffix in sorted(_SUFFIXES, key=len, reverse=True):
+            if key.endswith(suffix):
+                unit, factor, offset = _SUFFIXES[suffix]
+                shown = value * factor + offset
+                if suffix == "_pa":
+                    return f"{_num(shown)} bar ({_num(value / 6894.757293168361)} psi)"
+                if suffix == "_k":
+                    return f"{shown:.2f} °C ({value:.2f} K)"
+                return f"{_num(shown)} {unit}"
+        return _num(value)
+    if isinstance(value, (list, tuple)):
+        return ", ".join(str(v) for v in value)
+    return str(value)
+
+
+def _num(x: float) -> str:
+    """Four significant figures, no exponent for everyday magnitudes."""
+    if isinstance(x, int):
+        return str(x)
+    if x == 0 or not math.isfinite(x):
+        return f"{x:g}"
+    mag = abs(x)
+    if 1e-3 <= mag < 1e6:
+        digits = max(0, 3 - int(math.floor(math.log10(mag))))
+        return f"{x:.{digits}f}"
+    return f"{x:.3e}"
+
+
+def table_text(answer: dict[str, Any]) -> str:
+    """The readable table for an answer, cautions and the local-codes reminder last."""
+    rows = []
+    for key, value in answer.items():
+        if key in ("warnings", "cautions") or isinstance(value, (dict, list)) and key != "":
+            continue
+        label, _ = label_of(key)
+        rows.append((label, format_value(key, value)))
+    width = max((len(r[0]) for r in rows), default=0)
+    lines = [f"{label:<{width}}  {text}" for label, text in rows]
+    for key, value in answer.items():
+        if isinstance(value, list) and key not in ("warnings", "cautions") and value:
+            lines.append("")
+            lines.append(f"{key.replace('_', ' ')}:")
+            for item in value:
+                if isinstance(item, dict):
+                    lines.append("  " + "; ".join(
+                        f"{label_of(k)[0]} {format_value(k, v)}" for k, v in item.items()))
+                else:
+                    lines.append(f"  {item}")
+    warnings = answer.get("warnings") or []
+    cautions = answer.get("cautions") or []
+    if warnings:
+        lines.append("")
+        lines.extend(f"WARNING: {w}" for w in warnings)
+    if cautions:
+        lines.append("")
+        lines.extend(f"caution: {c}" for c in cautions)
+        lines.append(f"caution: {LOCAL_CODES}")
+    return "\n".join(lines)
+
+
+def emit(answer: dict[str, Any], args: Any, out: IO[str]) -> None:
+    """Write ``answer`` to ``out`` as JSON (``--json``) or as the readable table."""
+    if getattr(args, "json", False):
+        json.dump(answer, out, indent=2, allow_nan=False, default=_jsonable)
+        out.write("\n")
+        return
+    render = getattr(args._module, "render", None) if hasattr(args, "_module") else None
+    out.write((render(answer, args) if render else table_text(answer)) + "\n")
+
+
+def _jsonable(obj: Any) -> Any:
+    if hasattr(obj, "__dataclass_fields__"):
+        import dataclasses
+
+        return dataclasses.asdict(obj)
+    raise TypeError(f"not JSON serialisable: {type(obj).__name__}")
