@@ -1,0 +1,237 @@
+"""The route-model interface: what a way of getting CO2 takes in and what it gives back.
+
+A route is any object with ``id``, ``label``, ``options`` (a tuple of :class:`Option`) and
+``compute(request) -> RouteResult``. Routes are found through the ``co2routes.sources`` entry-point
+group (see :mod:`sources.registry`); the built-in ones register the same way in our own
+``pyproject.toml``.
+
+Every quantity here is SI (kg, K, Pa, s) except where a field name says otherwise (``_kj``,
+``_kwh``, ``_h``, ``_l``), which are the units the reports use.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import Any, Mapping, Protocol, runtime_checkable
+
+from thermo.errors import InputError
+from thermo.units import parse
+
+
+@dataclass(frozen=True, slots=True)
+class Option:
+    """One setting of a route, typed by the user as a string.
+
+    ``dimension`` is a :mod:`thermo.units` dimension (the value is parsed to an SI float and
+    checked against ``low``/``high``, both SI), or ``"choice"`` (the value must be one of
+    ``choices``), or ``"count"`` (a whole number within ``low``/``high``).
+
+    >>> Option("excess_air", "excess air", "fraction", "15 %", low=0.0, high=3.0).parse("20 %")
+    0.2
+    >>> Option("acid", "acid", "choice", "hcl", choices=("hcl", "acetic")).parse("vinegar")
+    Traceback (most recent call last):
+    ...
+    thermo.errors.InputError: option acid: must be one of hcl, acetic (got 'vinegar')
+    """
+
+    key: str
+    label: str
+    dimension: str
+    default: str
+    choices: tuple[str, ...] = ()
+    low: float | None = None
+    high: float | None = None
+    help: str = ""
+
+    def parse(self, text: str | float | int) -> float | str | int:
+        """The option's value from what the user typed (SI float, a choice, or a count)."""
+        name = f"option {self.key}"
+        if self.dimension == "choice":
+            value = str(text).strip().lower()
+            if value not in self.choices:
+                raise InputError(name, f"must be one of {', '.join(self.choices)}", got=repr(str(text)))
+            return value
+        if self.dimension == "count":
+            try:
+                number = int(str(text).strip())
+            except ValueError:
+                raise InputError(name, "must be a whole number", got=repr(str(text))) from None
+            self._check_range(name, number, text)
+            return number
+        number = parse(text, name, self.dimension)
+        self._check_range(name, number, text)
+        return number
+
+    def _check_range(self, name: str, number: float, text: object) -> None:
+        if (self.low is not None and number < self.low) or (self.high is not None and number > self.high):
+            raise InputError(name, f"must lie between {self.low:g} and {self.high:g} (SI units)", got=text)
+
+
+@dataclass(frozen=True, slots=True)
+class Site:
+    """Where the batch runs: ambient temperature [K], pressure [Pa], CO2 in air [mol/mol]."""
+
+    temperature_k: float = 293.15
+    pressure_pa: float = 101325.0
+    air_co2_fraction: float = 425e-6
+
+
+@dataclass(frozen=True, slots=True)
+class RouteRequest:
+    """What a route is asked for: CO2 to deliver per batch [kg], the site, parsed options."""
+
+    co2_kg: float
+    site: Site
+    options: Mapping[str, Any]
+
+
+@dataclass(frozen=True, slots=True)
+class Reagent:
+    """A feed as bought. ``mass_kg`` is what goes on the scale (solution included);
+    ``pure_mass_kg`` the active compound in it; ``volume_l`` for liquids; ``price_key`` the price
+    book entry; ``basis`` what the price applies to (``"mass"``, ``"volume"`` or ``"pure"``)."""
+
+    name: str
+    formula: str
+    mass_kg: float
+    pure_mass_kg: float
+    volume_l: float | None
+    price_key: str
+    basis: str = "mass"
+
+
+@dataclass(frozen=True, slots=True)
+class Byproduct:
+    """Something left over: spent liquor, ethanol, lime, condensate ... [kg]."""
+
+    name: str
+    formula: str
+    mass_kg: float
+    note: str = ""
+
+
+@dataclass(frozen=True, slots=True)
+class Use:
+    """A priced quantity other than a reagent: electricity [kWh], fuel heat [kWh], water [m3] ...
+
+    ``dimension`` names what ``amount`` is measured in: ``"energy_kwh"``, ``"mass_kg"``,
+    ``"volume_m3"`` or ``"volume_l"``.
+    """
+
+    name: str
+    amount: float
+    dimension: str
+    price_key: str
+
+
+@dataclass(frozen=True, slots=True)
+class Energy:
+    """Energy a batch uses [kWh]: electricity, fuel (as heating value) and other heat."""
+
+    electricity_kwh: float = 0.0
+    fuel_kwh: float = 0.0
+    heat_kwh: float = 0.0
+
+    @property
+    def total_kwh(self) -> float:
+        """All three together [kWh]."""
+        return self.electricity_kwh + self.fuel_kwh + self.heat_kwh
+
+
+@dataclass(frozen=True, slots=True)
+class CostLine:
+    """One line of the cost breakdown; ``cost`` is ``None`` when its price is unknown."""
+
+    item: str
+    amount: float
+    unit: str
+    unit_price: float | None
+    cost: float | None
+
+
+@dataclass(frozen=True, slots=True)
+class RawGas:
+    """The gas as it leaves the route, before drying: mole fractions, temperature, pressure."""
+
+    mole_fractions: Mapping[str, float]
+    temperature_k: float
+    pressure_pa: float = 101325.0
+
+    @property
+    def co2_mole_fraction(self) -> float:
+        """CO2 mole fraction of the raw gas (wet basis)."""
+        return float(self.mole_fractions.get("CO2", 0.0))
+
+
+@dataclass(frozen=True, slots=True)
+class RouteResult:
+    """The full answer of a route for one batch. Costs are filled by :mod:`sources.costing`."""
+
+    route_id: str
+    label: str
+    co2_kg: float
+    co2_generated_kg: float
+    reagents: tuple[Reagent, ...]
+    byproducts: tuple[Byproduct, ...]
+    uses: tuple[Use, ...]
+    raw_gas: RawGas
+    heat_kj: float
+    temperature_change_k: float | None
+    water_g_per_kg_co2: float
+    energy: Energy
+    time_h: float
+    hazard: int
+    hazard_reason: str
+    warnings: tuple[str, ...] = ()
+    cautions: tuple[str, ...] = ()
+    costs: tuple[CostLine, ...] = ()
+    notes: tuple[str, ...] = field(default=())
+
+    @property
+    def energy_kwh_per_kg(self) -> float:
+        """All energy used per kg of CO2 delivered [kWh/kg]."""
+        return self.energy.total_kwh / self.co2_kg
+
+    @property
+    def reagent_kg_per_kg(self) -> float:
+        """Mass of everything bought per kg of CO2 delivered [kg/kg]."""
+        return sum(r.mass_kg for r in self.reagents) / self.co2_kg
+
+    @property
+    def total_cost(self) -> float | None:
+        """Sum of the breakdown, ``None`` if any line's price is unknown."""
+        if any(line.cost is None for line in self.costs):
+            return None
+        return sum(line.cost for line in self.costs)  # type: ignore[misc]
+
+    @property
+    def cost_per_kg(self) -> float | None:
+        """Cost per kg of CO2 delivered, ``None`` if any price is unknown."""
+        total = self.total_cost
+        return None if total is None else total / self.co2_kg
+
+
+@runtime_checkable
+class Route(Protocol):
+    """What every route model provides."""
+
+    id: str
+    label: str
+    options: tuple[Option, ...]
+
+    def compute(self, request: RouteRequest) -> RouteResult:  # pragma: no cover - protocol
+        """Plan one batch for ``request``."""
+        ...
+
+
+def parse_options(route: Route, given: Mapping[str, Any]) -> dict[str, Any]:
+    """Each option of ``route`` parsed from ``given`` (strings) or its default.
+
+    Unknown keys are refused with the list of allowed ones.
+    """
+    known = {opt.key: opt for opt in route.options}
+    for key in given:
+        if key not in known:
+            allowed = ", ".join(known) or "none"
+            raise InputError(f"route {route.id}", f"has no option {key!r}; options are {allowed}")
+    return {key: opt.parse(given.get(key, opt.default)) for key, opt in known.items()}

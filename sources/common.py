@@ -1,0 +1,49 @@
+"""Small helpers the route models share (so that each is written once)."""
+
+from __future__ import annotations
+
+from typing import Mapping
+
+#: Heat capacity of a dilute aqueous batch liquor [J/(kg K)]: that of liquid water at 25 degC,
+#: 4181 J/(kg K) (IAPWS-95). Salty liquors are a few per cent lower; the temperature change it
+#: gives is an estimate to within about 10 % for liquors under 20 % salt.
+LIQUOR_CP_J_KG_K = 4181.0
+
+
+def temperature_change(heat_kj: float, liquor_kg: float, cp_j_kg_k: float = LIQUOR_CP_J_KG_K) -> float:
+    """Temperature change of an adiabatic batch liquor [K] from the batch's enthalpy change.
+
+    dT = -H / (m cp): a batch that takes heat in (H > 0) cools.
+
+    >>> round(temperature_change(41.81, 1.0), 3)
+    -10.0
+    """
+    return -heat_kj * 1000.0 / (liquor_kg * cp_j_kg_k)
+
+
+def normalised(fractions: Mapping[str, float]) -> dict[str, float]:
+    """Mole fractions scaled to sum to one, zero entries dropped.
+
+    >>> normalised({"CO2": 2.0, "H2O": 2.0, "N2": 0.0})
+    {'CO2': 0.5, 'H2O': 0.5}
+    """
+    total = sum(fractions.values())
+    return {k: v / total for k, v in fractions.items() if v > 0.0}
+
+
+#: Molar masses [kg/mol] from IUPAC standard atomic weights (abridged, 2021) for the gases the
+#: raw-gas balances use.
+MOLAR_MASS = {"CO2": 0.0440095, "H2O": 0.0180153, "N2": 0.0280134, "O2": 0.0319988, "Ar": 0.039948,
+              "CO": 0.0280101, "C2H5OH": 0.0460684}
+
+
+def water_g_per_kg_co2(fractions: Mapping[str, float]) -> float:
+    """Water carried per kg of CO2 [g/kg] from raw-gas mole fractions.
+
+    >>> round(water_g_per_kg_co2({"CO2": 0.97, "H2O": 0.03}), 2)
+    12.66
+    """
+    x_co2 = fractions.get("CO2", 0.0)
+    if x_co2 <= 0.0:
+        return float("inf")
+    return 1000.0 * fractions.get("H2O", 0.0) * MOLAR_MASS["H2O"] / (x_co2 * MOLAR_MASS["CO2"])
