@@ -78,11 +78,13 @@ class Site:
 
 @dataclass(frozen=True, slots=True)
 class RouteRequest:
-    """What a route is asked for: CO2 to deliver per batch [kg], the site, parsed options."""
+    """What a route is asked for: CO2 to deliver per batch [kg], the site, parsed options, and
+    the scenario's end product (``"gas"``, ``"liquid"`` or ``"dry-ice"``)."""
 
     co2_kg: float
     site: Site
     options: Mapping[str, Any]
+    end_product: str = "gas"
 
 
 @dataclass(frozen=True, slots=True)
@@ -186,6 +188,9 @@ class RouteResult:
     cautions: tuple[str, ...] = ()
     costs: tuple[CostLine, ...] = ()
     notes: tuple[str, ...] = field(default=())
+    #: what the route hands over: ``"raw-gas"`` (to be dried, and compressed if the end product
+    #: asks), or ``"gas"``, ``"liquid"``, ``"dry-ice"`` when it is bought already in that form.
+    delivers: str = "raw-gas"
 
     @property
     def energy_kwh_per_kg(self) -> float:
