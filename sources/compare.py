@@ -1,0 +1,219 @@
+"""The side-by-side comparison: every route for one scenario, costed, conditioned and ranked.
+
+For each route: compute the batch, size its dryer from its raw gas, add delivery (compression,
+storage, dry ice) when the end product asks for it, price everything with the scenario's price
+book, then rank all routes by a weighted score of the criteria in :data:`sources.scenario.CRITERIA`.
+
+The score is this project's own: each criterion is scaled across the routes to 0 (best) .. 1
+(worst), an unknown value counts as worst, and the weighted mean of the scaled criteria orders the
+ranking (lower is better; a tie goes to the lower cost).
+"""
+
+from __future__ import annotations
+
+import dataclasses
+from dataclasses import dataclass
+from typing import Any, Callable, Mapping, Sequence
+
+from sources.base import Route, RouteRequest, RouteResult, parse_options
+from sources.prices import cost_lines
+from sources.registry import catalogue
+from sources.scenario import CRITERIA, Scenario
+
+#: How each criterion is read off a row, and whether higher is better.
+_CRITERION: dict[str, tuple[Callable[["RouteRow"], float | None], bool]] = {
+    "cost": (lambda r: r.cost_per_kg, False),
+    "energy": (lambda r: r.result.energy_kwh_per_kg, False),
+    "time": (lambda r: r.result.time_h, False),
+    "heat": (lambda r: abs(r.result.heat_kj) / r.result.co2_kg, False),
+    "water": (lambda r: r.result.water_g_per_kg_co2, False),
+    "purity": (lambda r: r.result.raw_gas.co2_mole_fraction, True),
+    "hazard": (lambda r: float(r.result.hazard), False),
+}
+
+
+@dataclass(frozen=True, slots=True)
+class RouteRow:
+    """One route in the comparison: its costed result, rank and score (0 best .. 1 worst)."""
+
+    result: RouteResult
+    rank: int
+    score: float
+
+    @property
+    def cost_per_kg(self) -> float | None:
+        """Cost per kg of the end product (``None`` when a price is unknown)."""
+        return self.result.cost_per_kg
+
+
+@dataclass(frozen=True, slots=True)
+class Comparison:
+    """Every route's row, best first, with the weights used and any route that failed."""
+
+    scenario_name: str
+    end_product: str
+    currency: str
+    weights: Mapping[str, float]
+    rows: tuple[RouteRow, ...]
+    failures: tuple[str, ...]
+
+
+def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
+             options: Mapping[str, str] | None = None) -> RouteResult:
+    """One route's batch for ``scenario``, priced. ``options`` override the scenario's."""
+    given = dict(scenario.options.get(route.id, {}))
+    given.update(options or {})
+    request = RouteRequest(
+        co2_kg=scenario.co2_kg if co2_kg is None else co2_kg,
+        site=scenario.site,
+        options=parse_options(route, given),
+        end_product=scenario.end_product,
+    )
+    result = route.compute(request)
+    return dataclasses.replace(result, costs=cost_lines(result.reagents, result.uses, scenario.prices))
+
+
+def rank(results: Sequence[RouteResult], weights: Mapping[str, float]) -> tuple[RouteRow, ...]:
+    """Order ``results`` by the weighted score; returns rows best first.
+
+    >>> rank([], {"cost": 1.0})
+    ()
+    """
+    provisional = [RouteRow(r, 0, 0.0) for r in results]
+    total_weight = sum(w for k, w in weights.items() if k in _CRITERION and w > 0) or 1.0
+    scores = [0.0] * len(provisional)
+    for key in CRITERIA:
+        weight = weights.get(key, 0.0)
+        if weight <= 0:
+            continue
+        read, higher_better = _CRITERION[key]
+        values = [read(row) for row in provisional]
+        known = [v for v in values if v is not None]
+        low, high = (min(known), max(known)) if known else (0.0, 0.0)
+        for i, v in enumerate(values):
+            if v is None:
+                scaled = 1.0
+            elif high > low:
+                scaled = (high - v) / (high - low) if higher_better else (v - low) / (high - low)
+            else:
+                scaled = 0.0
+            scores[i] += weight * scaled / total_weight
+    order = sorted(range(len(provisional)), key=lambda i: (
+        round(scores[i], 12),
+        provisional[i].cost_per_kg if provisional[i].cost_per_kg is not None else float("inf")))
+    return tuple(RouteRow(provisional[i].result, n + 1, scores[i]) for n, i in enumerate(order))
+
+
+def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Comparison:
+    """Every route (default: every route found) for ``scenario``, ranked."""
+    cat = catalogue()
+    chosen = cat.routes if routes is None else tuple(routes)
+    results = []
+    failures = list(cat.failures)
+    for route in chosen:
+        try:
+            results.append(evaluate(route, scenario))
+        except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
+            from thermo.errors import InputError
+
+            if isinstance(err, InputError):
+                raise
+            failures.append(f"route {route.id!r} failed: {type(err).__name__}: {err}")
+    return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
+                      dict(scenario.weights), rank(results, scenario.weights), tuple(failures))
+
+
+def row_record(row: RouteRow) -> dict[str, Any]:
+    """The JSON record of one row (the keys ``compare --json`` prints)."""
+    r = row.result
+    return {
+        "id": r.route_id,
+        "label": r.label,
+        "rank": row.rank,
+        "score": round(row.score, 6),
+        "co2_kg": r.co2_kg,
+        "cost_per_kg": r.cost_per_kg,
+        "energy_kwh_per_kg": r.energy_kwh_per_kg,
+        "time_h": r.time_h,
+        "reagent_kg_per_kg": r.reagent_kg_per_kg,
+        "heat_kj": r.heat_kj,
+        "water_g_per_kg_co2": r.water_g_per_kg_co2,
+        "co2_mole_fraction": r.raw_gas.co2_mole_fraction,
+        "hazard": r.hazard,
+        "hazard_reason": r.hazard_reason,
+        "delivers": r.delivers,
+        "warnings": list(r.warnings),
+        "cautions": list(r.cautions),
+    }
+
+
+def comparison_record(comparison: Comparison) -> dict[str, Any]:
+    """The whole comparison as the JSON ``compare --json`` prints."""
+    return {
+        "scenario": comparison.scenario_name,
+        "end_product": comparison.end_product,
+        "currency": comparison.currency,
+        "weights": dict(comparison.weights),
+        "routes": [row_record(row) for row in comparison.rows],
+        "failures": list(comparison.failures),
+    }
+
+
+def batch_record(result: RouteResult, currency: str) -> dict[str, Any]:
+    """The full recipe of one route (the JSON ``batch --json`` prints)."""
+    return {
+        "route": result.route_id,
+        "label": result.label,
+        "currency": currency,
+        "co2_kg": result.co2_kg,
+        "co2_generated_kg": result.co2_generated_kg,
+        "reagents": [
+            {"name": g.name, "formula": g.formula, "mass_kg": g.mass_kg, "volume_l": g.volume_l,
+             "pure_mass_kg": g.pure_mass_kg, "cost": _cost_of(result, g.name)}
+            for g in result.reagents
+        ],
+        "byproducts": [
+            {"name": b.name, "formula": b.formula, "mass_kg": b.mass_kg, "note": b.note}
+            for b in result.byproducts
+        ],
+        "heat_kj": result.heat_kj,
+        "heat_in_words": heat_words(result.heat_kj),
+        "temperature_change_k": result.temperature_change_k,
+        "raw_gas_mole_fractions": dict(result.raw_gas.mole_fractions),
+        "water_g_per_kg_co2": result.water_g_per_kg_co2,
+        "co2_mole_fraction": result.raw_gas.co2_mole_fraction,
+        "energy_kwh_per_kg": result.energy_kwh_per_kg,
+        "electricity_kwh": result.energy.electricity_kwh,
+        "fuel_kwh": result.energy.fuel_kwh,
+        "heat_supplied_kwh": result.energy.heat_kwh,
+        "time_h": result.time_h,
+        "costs": [dataclasses.asdict(line) for line in result.costs],
+        "cost_per_kg": result.cost_per_kg,
+        "hazard": result.hazard,
+        "hazard_reason": result.hazard_reason,
+        "notes": list(result.notes),
+        "warnings": list(result.warnings),
+        "cautions": list(result.cautions),
+    }
+
+
+def _cost_of(result: RouteResult, name: str) -> float | None:
+    for line in result.costs:
+        if line.item == name:
+            return line.cost
+    return None
+
+
+def heat_words(heat_kj: float) -> str:
+    """The heat sign said in words.
+
+    >>> heat_words(12.0)
+    'takes heat in (the batch cools)'
+    >>> heat_words(-3.0)
+    'gives heat off (the batch warms)'
+    """
+    if heat_kj > 0:
+        return "takes heat in (the batch cools)"
+    if heat_kj < 0:
+        return "gives heat off (the batch warms)"
+    return "neither takes in nor gives off heat"
