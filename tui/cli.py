@@ -16,12 +16,10 @@ from thermo.errors import InputError
 
 #: The verbs, in the order ``--help`` lists them; each is ``tui.commands.<module>``.
 COMMANDS: tuple[str, ...] = (
-    "saturation",
-    "store",
-    "snow",
-    "moisture",
-    "reaction",
-    "calcination",
+    "compare",
+    "batch",
+    "routes",
+    "demo",
 )
 
 PROG = "co2routes"

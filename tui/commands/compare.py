@@ -1,0 +1,62 @@
+"""``co2routes compare [SCENARIO]``: every route side by side, ranked."""
+
+from __future__ import annotations
+
+import argparse
+
+NAME = "compare"
+HELP = "rank every route for a scenario (the invented demo when none is given)"
+WANTS_FORMAT_FLAGS = True
+
+
+def add_arguments(parser: argparse.ArgumentParser) -> None:
+    """Options of ``compare``."""
+    parser.add_argument("scenario", nargs="?", help="scenario TOML file (default: the invented demo)")
+    parser.add_argument("--weight", action="append", default=[], metavar="CRITERION=W",
+                        help="weight of a criterion in the rank: cost, energy, time, heat, water, purity, hazard")
+    group = parser.add_mutually_exclusive_group()
+    group.add_argument("--csv", action="store_true", help="print CSV")
+    group.add_argument("--markdown", action="store_true", help="print Markdown")
+
+
+def load_scenario(args: argparse.Namespace):
+    """The scenario named on the command line (or the demo), with ``--weight`` applied."""
+    import dataclasses
+
+    from sources.scenario import CRITERIA, demo, load
+    from thermo.errors import InputError
+
+    scenario = demo() if args.scenario is None else load(args.scenario)
+    weights = dict(scenario.weights)
+    for item in getattr(args, "weight", []):
+        key, _, value = item.partition("=")
+        key = key.strip()
+        if key not in CRITERIA:
+            raise InputError("--weight", f"criterion must be one of {', '.join(CRITERIA)}", got=repr(item))
+        try:
+            weights[key] = float(value)
+        except ValueError:
+            raise InputError("--weight", "must be CRITERION=NUMBER, e.g. cost=3", got=repr(item)) from None
+        if weights[key] < 0 or weights[key] != weights[key]:
+            raise InputError("--weight", "a weight must be a number of at least 0", got=repr(item))
+    return dataclasses.replace(scenario, weights=weights)
+
+
+def run(args: argparse.Namespace) -> dict:
+    """The comparison as its JSON record (the table and other formats come from ``render``)."""
+    from sources.compare import compare, comparison_record
+
+    comparison = compare(load_scenario(args))
+    args._comparison = comparison
+    return comparison_record(comparison)
+
+
+def render(answer: dict, args: argparse.Namespace) -> str:
+    """Table, CSV or Markdown of the comparison."""
+    from tui.report import comparison_csv, comparison_markdown, comparison_table
+
+    if args.csv:
+        return comparison_csv(args._comparison).rstrip("\n")
+    if args.markdown:
+        return comparison_markdown(args._comparison).rstrip("\n")
+    return comparison_table(args._comparison)
