@@ -1,0 +1,87 @@
+"""Scenario files: demo, validation messages with file/key/line, exact round trip, atomic write."""
+
+import os
+import tomllib
+
+import pytest
+
+from sources import scenario as sc
+from thermo.errors import InputError
+
+
+def test_demos_are_labelled_invented_and_validate():
+    for which in sc.DEMOS:
+        text = sc.demo_text(which)
+        assert "INVENTED" in text
+        s = sc.demo(which)
+        assert s.co2_kg > 0
+
+
+def test_rate_demand_times_batch_gives_batch_mass():
+    s = sc.validate({"demand": "2 kg/day", "batch": "12 h"})
+    assert s.co2_kg == pytest.approx(1.0)
+    assert sc.validate({"demand": "3 kg"}).batch_s is None
+
+
+def test_error_names_file_key_and_line(tmp_path):
+    path = tmp_path / "mine.toml"
+    path.write_text('demand = "1 kg/day"\n\n[site]\ntemperature = "hot"\n')
+    with pytest.raises(InputError) as err:
+        sc.load(path)
+    text = str(err.value)
+    assert "mine.toml, line 4: site.temperature" in text and "\n" not in text
+
+
+@pytest.mark.parametrize("doc, field", [
+    ({}, "demand"),
+    ({"demand": "-1 kg"}, "demand"),
+    ({"demand": "1 kg", "end_product": "steam"}, "end_product"),
+    ({"demand": "1 kg", "colour": "red"}, "colour"),
+    ({"demand": "1 kg", "weights": {"cost": -1}}, "weights.cost"),
+    ({"demand": "1 kg", "dryer": {"target_ppmv": "20"}}, "dryer.target_ppmv"),
+    ({"demand": "1 kg", "delivery": {"stages": 0}}, "delivery.stages"),
+    ({"demand": "1 kg", "prices": {"sucrose": "1 / K"}}, "sucrose"),
+])
+def test_bad_documents_name_the_key(doc, field):
+    with pytest.raises(InputError) as err:
+        sc.validate(doc)
+    assert field in str(err.value)
+
+
+def test_malformed_toml_names_the_file(tmp_path):
+    path = tmp_path / "broken.toml"
+    path.write_text("demand = \n")
+    with pytest.raises(InputError) as err:
+        sc.load(path)
+    assert "broken.toml" in str(err.value) and "line 1" in str(err.value)
+
+
+def test_save_open_round_trip_is_exact(tmp_path):
+    doc = tomllib.loads(sc.demo_text())
+    path = tmp_path / "copy.toml"
+    sc.write_atomic(path, sc.to_toml(doc))
+    again, _ = sc.read_document(path)
+    assert again == doc
+
+
+def test_write_atomic_never_overwrites_unasked_and_leaves_no_temp(tmp_path):
+    path = tmp_path / "s.toml"
+    path.write_text("keep me")
+    with pytest.raises(InputError):
+        sc.write_atomic(path, "new")
+    assert path.read_text() == "keep me"
+    sc.write_atomic(path, "new", overwrite=True)
+    assert path.read_text() == "new"
+    assert [p.name for p in tmp_path.iterdir()] == ["s.toml"]
+
+
+@pytest.mark.skipif(os.geteuid() == 0, reason="root can write into a read-only folder")
+def test_read_only_folder_is_an_input_error(tmp_path):
+    folder = tmp_path / "ro"
+    folder.mkdir()
+    folder.chmod(0o500)
+    try:
+        with pytest.raises(InputError):
+            sc.write_atomic(folder / "s.toml", "x")
+    finally:
+        folder.chmod(0o700)
