@@ -20,6 +20,8 @@ COMMANDS: tuple[str, ...] = (
     "batch",
     "routes",
     "demo",
+    "reaction",
+    "calcination",
 )
 
 PROG = "co2routes"

@@ -1,0 +1,41 @@
+"""``co2routes calcination (--temperature T | --co2-pressure P)``: the CaCO3/CaO/CO2 equilibrium."""
+
+from __future__ import annotations
+
+import argparse
+
+NAME = "calcination"
+HELP = "equilibrium CO2 pressure over limestone and lime at a temperature, or the reverse"
+
+
+def add_arguments(parser: argparse.ArgumentParser) -> None:
+    """Options of ``calcination``."""
+    group = parser.add_mutually_exclusive_group(required=True)
+    group.add_argument("--temperature", metavar="T",
+                       help="kiln temperature, e.g. '900 degC' (427-927 degC)")
+    group.add_argument("--co2-pressure", metavar="P",
+                       help="CO2 partial pressure over the charge, e.g. '1 atm' or '425 ppm * 1 atm'")
+
+
+def run(args: argparse.Namespace) -> dict:
+    """The equilibrium point's JSON answer."""
+    from thermo import cautions
+    from thermo.calcination import calcination_temperature, co2_pressure_over_calcite
+    from thermo.units import parse, parse_positive
+
+    if args.temperature is not None:
+        point = co2_pressure_over_calcite(parse(args.temperature, "--temperature", "temperature"))
+    else:
+        point = calcination_temperature(parse_positive(args.co2_pressure, "--co2-pressure",
+                                                       "pressure"))
+    warnings = [
+        "Equilibrium for pure calcite: kilns run hotter than this to calcine at a useful rate "
+        "(common practice)."
+    ]
+    return {
+        "temperature_k": point.temperature_k,
+        "co2_pressure_pa": point.co2_pressure_pa,
+        "delta_h_kj_per_mol": point.delta_h_j_per_mol / 1000.0,
+        "warnings": warnings,
+        "cautions": [cautions.HOT_SURFACE, cautions.LIME_DUST, cautions.ASPHYXIATION],
+    }

@@ -1,0 +1,78 @@
+"""``co2routes reaction "EQUATION" [--temperature T]``: heat of a reaction, checked for balance."""
+
+from __future__ import annotations
+
+import argparse
+
+NAME = "reaction"
+HELP = "heat of a balanced reaction, e.g. \"NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)\""
+
+
+def add_arguments(parser: argparse.ArgumentParser) -> None:
+    """Options of ``reaction``."""
+    parser.add_argument(
+        "equation",
+        help="the equation with phase tags (g), (l), (s), (aq); coefficients like '2 HCl(aq)'; "
+        "arrow '->' or '='",
+    )
+    parser.add_argument("--temperature", metavar="T", default="25 degC",
+                        help="temperature of reactants and products, e.g. '20 degC' (default 25 degC)")
+
+
+def heat_in_words(delta_h_kj_per_mol: float) -> str:
+    """Say what the sign of the reaction heat means for the batch.
+
+    >>> heat_in_words(31.4)
+    'takes heat in (the batch cools)'
+    >>> heat_in_words(-28.8)
+    'gives heat off (the batch warms)'
+    """
+    if abs(delta_h_kj_per_mol) < 0.05:
+        return "neither takes in nor gives off noticeable heat"
+    if delta_h_kj_per_mol > 0:
+        return "takes heat in (the batch cools)"
+    return "gives heat off (the batch warms)"
+
+
+def run(args: argparse.Namespace) -> dict:
+    """The reaction's JSON answer."""
+    from thermo import cautions
+    from thermo.reaction import parse_reaction, reaction_enthalpy
+    from thermo.units import parse
+
+    temperature = parse(args.temperature, "--temperature", "temperature")
+    result = reaction_enthalpy(args.equation, temperature)
+    names = parse_reaction(args.equation).species_names()
+    warnings = list(result.warnings)
+    if any(n.endswith("(aq)") for n in names):
+        warnings.append(
+            "Dissolved species are taken at infinite dilution; diluting a strong acid from its "
+            "bought strength adds its heat of dilution (see thermo.dilution)."
+        )
+    return {
+        "equation": result.equation,
+        "temperature_k": result.temperature_k,
+        "delta_h_kj_per_mol": result.delta_h_kj_per_mol,
+        "delta_h_kj_per_kg_co2": result.delta_h_kj_per_kg_co2,
+        "balanced": result.balanced,
+        "heat_in_words": heat_in_words(result.delta_h_kj_per_mol),
+        "warnings": warnings,
+        "cautions": _cautions(names, cautions),
+    }
+
+
+def _cautions(names: tuple[str, ...], cautions) -> list[str]:
+    """The caution sentences that the reagents and products call for."""
+    out: list[str] = []
+    acids = ("HCl(aq)", "H2SO4(aq)", "CH3COOH(aq)", "C6H8O7(s)", "HCl(g)", "H2SO4(l)")
+    if any(n in acids for n in names):
+        out += [cautions.ACID, cautions.SPENT_LIQUOR]
+    if any(n in ("CaO(s)", "Ca(OH)2(s)") for n in names):
+        out.append(cautions.LIME_DUST)
+    if "C2H5OH(l)" in names or "C2H5OH(aq)" in names:
+        out.append(cautions.FERMENTER)
+    if any(n in ("O2(g)",) for n in names):
+        out.append(cautions.BURNER)
+    if "CO2(g)" in names:
+        out.append(cautions.ASPHYXIATION)
+    return out
