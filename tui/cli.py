@@ -20,6 +20,10 @@ COMMANDS: tuple[str, ...] = (
     "batch",
     "routes",
     "demo",
+    "saturation",
+    "store",
+    "snow",
+    "moisture",
     "reaction",
     "calcination",
 )

@@ -1,0 +1,46 @@
+"""``co2routes saturation``: the liquid-vapour saturation point of CO2 at a temperature or pressure."""
+
+from __future__ import annotations
+
+import argparse
+
+NAME = "saturation"
+HELP = "CO2 saturation pressure and liquid/vapour densities at a temperature, or the temperature at a pressure"
+
+
+def add_arguments(parser: argparse.ArgumentParser) -> None:
+    """Options of ``saturation``."""
+    group = parser.add_mutually_exclusive_group(required=True)
+    group.add_argument("--temperature", metavar="T",
+                       help="liquid temperature, e.g. '20 degC' (-56.56 to 30.98 degC)")
+    group.add_argument("--pressure", metavar="P",
+                       help="absolute pressure, e.g. '50 bar' (5.18 to 73.77 bar)")
+
+
+def run(args: argparse.Namespace) -> dict:
+    """The saturation point as the JSON answer."""
+    from thermo import cautions, co2
+    from thermo.units import parse
+    from tui.commands._options import for_option
+
+    if args.temperature is not None:
+        t = parse(args.temperature, "--temperature", "temperature")
+        with for_option("--temperature"):
+            sat = co2.saturation_at_temperature(t)
+    else:
+        p = parse(args.pressure, "--pressure", "pressure")
+        with for_option("--pressure"):
+            sat = co2.saturation_at_pressure(p)
+    warnings = []
+    if co2.CRITICAL_TEMPERATURE_K - sat.temperature_k < 2.0:
+        warnings.append("Within 2 K of the critical point (30.98 degC): liquid and vapour densities "
+                        "converge and properties change steeply with temperature.")
+    return {
+        "temperature_k": sat.temperature_k,
+        "pressure_pa": sat.pressure_pa,
+        "liquid_density_kg_m3": sat.liquid_density_kg_m3,
+        "vapor_density_kg_m3": sat.vapor_density_kg_m3,
+        "enthalpy_of_vaporization_kj_per_kg": sat.enthalpy_of_vaporization_j_kg / 1e3,
+        "warnings": warnings,
+        "cautions": [cautions.PRESSURE, cautions.CYLINDER_HEAT],
+    }
