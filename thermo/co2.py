@@ -290,7 +290,7 @@ def phase_at(pressure_pa: float, temperature_k: float) -> str:
 
 
 def _check_vessel_temperature(temperature_k: float) -> float:
-    t = require_positive("temperature", temperature_k)
+    t = float(require_positive("temperature", temperature_k))
     if t < TRIPLE_TEMPERATURE_K:
         raise InputError("temperature", "a vessel state needs at least 216.592 K: below the triple "
                          "point CO2 is solid or vapour and the equation of state does not apply", got=t)
@@ -338,8 +338,8 @@ def vessel_by_pressure(volume_m3: float, pressure_pa: float, temperature_k: floa
     >>> round(s.co2_mass_kg, 3), s.phase
     (0.219, 'gas')
     """
-    v = require_positive("volume", volume_m3)
-    p = require_positive("pressure", pressure_pa)
+    v = float(require_positive("volume", volume_m3))
+    p = float(require_positive("pressure", pressure_pa))
     t = _check_vessel_temperature(temperature_k)
     phase = phase_at(p, t)
     if phase == "two-phase":
@@ -389,8 +389,8 @@ def vessel_by_mass(volume_m3: float, mass_kg: float, temperature_k: float) -> Ve
     >>> s.phase, round(s.pressure_pa / 1e5, 2), round(s.fill_density_kg_l, 3)
     ('two-phase', 57.29, 0.672)
     """
-    v = require_positive("volume", volume_m3)
-    m = require_positive("mass", mass_kg)
+    v = float(require_positive("volume", volume_m3))
+    m = float(require_positive("mass", mass_kg))
     t = _check_vessel_temperature(temperature_k)
     rho = m / v
     warnings: list[str] = []
