@@ -63,3 +63,8 @@ DESICCANT = (
     "Hot regeneration of a desiccant bed releases steam: vent it, and let the bed cool before it "
     "takes gas again."
 )
+DELIQUESCENT_SALT = (
+    "Calcium chloride dust and brine irritate eyes and skin and corrode steel and aluminium: wear "
+    "goggles and gloves, use a plastic or stainless vessel with a drain, and dispose of spent brine "
+    "as local rules require."
+)
