@@ -25,6 +25,9 @@ from thermo.errors import InputError, require_positive
 WATER_MOLAR_MASS = 0.018015
 #: Triple point of water [K] (IAPWS-95).
 WATER_TRIPLE_K = 273.16
+#: Vapour pressure of liquid water at its triple point [Pa] (IAPWS-95, Wagner & Pruss 2002:
+#: 611.654771 Pa; the ice equation gives 611.657 Pa there).
+WATER_TRIPLE_PA = 611.654771
 #: Critical temperature of water [K] (IAPWS-95).
 WATER_CRITICAL_K = 647.096
 #: Lowest temperature of the Murphy & Koop (2005) ice equation [K].
@@ -123,9 +126,9 @@ def vapor_pressure(temperature_k: float) -> float:
 def dew_point(water_pressure_pa: float) -> float:
     """Dew point [K] for a water partial pressure: the inverse of :func:`vapor_pressure`.
 
-    Solves p_sat(T_d) = p_water. Below 611.657 Pa the result is a *frost point* (ice, below
-    273.16 K): the Murphy & Koop (2005) eq. 7 is inverted by Newton's method from their eq. 8
-    estimate. Above it, IAPWS-95 through CoolProp (``PropsSI('T','P',p,'Q',0,'Water')``).
+    Solves p_sat(T_d) = p_water. Below 611.6548 Pa (the liquid triple-point pressure) the result
+    is a *frost point* (ice, below 273.16 K): the Murphy & Koop (2005) eq. 7 is inverted by
+    Newton's method from their eq. 8 estimate. Above it, IAPWS-95 through CoolProp (``PropsSI('T','P',p,'Q',0,'Water')``).
 
     Parameters
     ----------
@@ -138,8 +141,7 @@ def dew_point(water_pressure_pa: float) -> float:
     -55.26
     """
     p = require_positive("water pressure", water_pressure_pa)
-    p_triple_ice = vapor_pressure_ice(WATER_TRIPLE_K)
-    if p < p_triple_ice:
+    if p < WATER_TRIPLE_PA:
         if p < vapor_pressure_ice(ICE_MIN_K):
             raise InputError("water pressure", "frost points below 110 K are outside Murphy & Koop (2005)",
                              got=p)
@@ -160,8 +162,7 @@ def dew_point(water_pressure_pa: float) -> float:
     if p > p_crit:
         raise InputError("water pressure", "must be below the critical pressure of water, 22.064 MPa",
                          got=p)
-    p_triple_liquid = cp.PropsSI("P", "T", WATER_TRIPLE_K, "Q", 0, "Water")
-    if p <= p_triple_liquid:
+    if p <= cp.PropsSI("P", "T", WATER_TRIPLE_K, "Q", 0, "Water"):
         return WATER_TRIPLE_K
     return float(cp.PropsSI("T", "P", p, "Q", 0, "Water"))
 

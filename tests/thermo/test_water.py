@@ -5,7 +5,7 @@ from __future__ import annotations
 import math
 
 import pytest
-from hypothesis import given, strategies as st
+from hypothesis import example, given, strategies as st
 
 from thermo import water
 from thermo.errors import InputError
@@ -103,6 +103,8 @@ def test_dew_point_of_saturated_gas_at_100_c():
 
 
 @given(st.floats(min_value=115.0, max_value=640.0))
+@example(273.16)
+@example(273.1599)
 def test_dew_point_inverts_vapor_pressure(t_k):
     # round trip through both branches; 1e-6 K
     assert water.dew_point(water.vapor_pressure(t_k)) == pytest.approx(t_k, abs=1e-6)
