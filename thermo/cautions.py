@@ -16,6 +16,10 @@ PRESSURE = (
     "Use only vessels rated above the highest pressure they can reach, each with a relief device; "
     "follow local pressure-equipment codes."
 )
+COMPRESSOR_HEAT = (
+    "Compressor heads and discharge lines run hot enough to burn: guard them, and stop the "
+    "machine if the discharge passes about 150 degC, where compressor oil breaks down."
+)
 CYLINDER_HEAT = (
     "A liquid CO2 cylinder's pressure rises steeply with temperature: keep it out of sun and away "
     "from heaters, and never fill past its filling ratio."

@@ -23,6 +23,7 @@ COMMANDS: tuple[str, ...] = (
     "saturation",
     "store",
     "snow",
+    "liquefy",
     "moisture",
     "reaction",
     "calcination",
