@@ -1,0 +1,93 @@
+"""Delivery: from dry gas at the site to the scenario's end product (gas, liquid or dry ice).
+
+For a liquid end product the dry gas is compressed in stages and condensed at the scenario's
+condensing temperature (:func:`thermo.compression.liquefy`). For dry ice the liquid is then
+flashed to 1 atm (:func:`thermo.flash.flash_at_temperature`); only the solid fraction becomes dry
+ice and the flash gas is vented, not recompressed (a simple rig; a recycle would need a second
+compressor), so each kg of dry ice takes ``1 / solid_fraction`` kg of raw CO2.
+
+Shaft work is turned into electricity with :data:`MOTOR_EFFICIENCY`.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from typing import Any
+
+from sources.base import Site
+from thermo import cautions
+
+#: Electric motor efficiency of a small compressor drive (common practice for fractional to
+#: few-kW induction motors: 0.75-0.90; IEC 60034-30-1 IE2/IE3 classes sit near 0.80-0.85 at 1 kW).
+MOTOR_EFFICIENCY = 0.80
+
+
+@dataclass(frozen=True, slots=True)
+class Delivery:
+    """What delivery adds to a batch: raw CO2 needed per kg of product, work, time, cautions."""
+
+    end_product: str
+    product_kg: float
+    raw_co2_kg: float
+    liquefaction: Any | None
+    flash: Any | None
+    electricity_kwh: float
+    time_h: float
+    warnings: tuple[str, ...]
+    cautions: tuple[str, ...]
+
+    @property
+    def raw_per_product(self) -> float:
+        """kg of raw CO2 per kg of end product [kg/kg]."""
+        return self.raw_co2_kg / self.product_kg
+
+
+def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, site: Site) -> tuple[float, Any | None]:
+    """kg of CO2 a route must deliver for ``product_kg`` of end product, and the flash used.
+
+    >>> from sources.scenario import DeliveryPlan
+    >>> raw_co2_needed(2.0, "gas", "raw-gas", DeliveryPlan(), Site())
+    (2.0, None)
+    """
+    if end_product != "dry-ice" or delivers == "dry-ice":
+        return product_kg, None
+    from thermo.flash import flash_at_temperature
+
+    # bought gas comes as a liquid cylinder at the site's temperature; made gas is condensed
+    temperature = site.temperature_k if delivers in ("gas", "liquid") else plan.condensing_temperature_k
+    flash = flash_at_temperature(min(temperature, 303.0))
+    return product_kg / flash.solid_fraction, flash
+
+
+def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_product: str,
+                  delivers: str, plan, site: Site) -> Delivery:
+    """Compression (when the route hands over raw gas and the product is liquid or dry ice),
+    flash and their cautions."""
+    warnings: list[str] = []
+    notes: list[str] = []
+    liquefaction = None
+    electricity = 0.0
+    time_h = 0.0
+    if end_product in ("liquid", "dry-ice") and delivers in ("raw-gas", "gas") and not (
+            delivers == "gas" and end_product == "dry-ice"):
+        from thermo.compression import liquefy
+
+        liquefaction = liquefy(
+            site.pressure_pa, site.temperature_k, plan.condensing_temperature_k,
+            stages=plan.stages, efficiency=plan.efficiency,
+            intercool_temperature_k=plan.intercool_temperature_k,
+            displacement_m3_s=plan.displacement_m3_s, mass_kg=raw_co2_kg,
+        )
+        electricity = liquefaction.work_j_per_kg * raw_co2_kg / MOTOR_EFFICIENCY / 3.6e6
+        if liquefaction.batch_time_s is not None:
+            time_h = liquefaction.batch_time_s / 3600.0
+        warnings.extend(liquefaction.warnings)
+    if end_product == "dry-ice" and flash is not None:
+        notes.append(f"{flash.solid_fraction:.0%} of the liquid becomes dry ice; the rest is vented as gas")
+    caution_list = []
+    if end_product in ("liquid", "dry-ice"):
+        caution_list += [cautions.PRESSURE, cautions.CYLINDER_HEAT]
+    if end_product == "dry-ice":
+        caution_list += [cautions.COLD_LIQUID, cautions.DRY_ICE]
+    return Delivery(end_product, product_kg, raw_co2_kg, liquefaction, flash, electricity, time_h,
+                    tuple(warnings + notes), tuple(caution_list))
