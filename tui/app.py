@@ -1,0 +1,85 @@
+"""The co2routes terminal interface: wires the planning screen, the keys screen and quitting.
+
+``run_app(None)`` opens the invented demo scenario; ``run_app(path)`` opens a scenario file. A
+file that cannot be read or is malformed opens the demo instead and says why on screen.
+"""
+
+from __future__ import annotations
+
+from typing import Any, Sequence
+
+from textual.app import App
+from textual.binding import Binding
+
+from tui.screens.dialogs import ConfirmDialog
+from tui.screens.help import KeysScreen, binding_rows
+from tui.screens.main import MainScreen
+from tui.session import Opened, open_demo, open_file
+from tui.widgets.ranking import RankingTable
+
+
+class Co2RoutesApp(App[int]):
+    """The application: one planning screen."""
+
+    TITLE = "co2routes"
+    ENABLE_COMMAND_PALETTE = False
+    BINDINGS = [Binding("ctrl+q", "leave", "quit (asks first when there are unsaved edits)", priority=True)]
+
+    def __init__(self, path: str | None = None, routes: Sequence[Any] | None = None) -> None:
+        super().__init__()
+        self.path = path
+        self.routes = routes
+        self.open_error: str | None = None
+
+    def on_mount(self) -> None:
+        opened: Opened
+        if self.path is None:
+            opened = open_demo()
+        else:
+            try:
+                opened = open_file(self.path)
+            except Exception as err:  # noqa: BLE001 - a bad file is a message, never a crash
+                self.open_error = f"could not open {self.path}: {err}; showing the invented demo"
+                opened = open_demo()
+        self.push_screen(MainScreen(opened, self.routes))
+        if self.open_error:
+            self.call_after_refresh(self.screen._say, self.open_error, True)
+
+    @property
+    def planner(self) -> MainScreen:
+        """The planning screen."""
+        for screen in self.screen_stack:
+            if isinstance(screen, MainScreen):
+                return screen
+        raise LookupError("the planning screen is not open")
+
+    def action_keys(self) -> None:
+        """Show every key."""
+        if isinstance(self.screen, KeysScreen):
+            return
+        sections = [("Anywhere", binding_rows(self.BINDINGS) + binding_rows(MainScreen.BINDINGS)),
+                    ("In the ranking", binding_rows(RankingTable.BINDINGS))]
+        self.push_screen(KeysScreen(sections))
+
+    def action_leave(self) -> None:
+        """Quit; with unsaved edits, ask first."""
+        try:
+            dirty = self.planner.dirty
+        except LookupError:
+            dirty = False
+        if not dirty:
+            self.exit(0)
+            return
+
+        def answer(yes: bool | None) -> None:
+            if yes:
+                self.exit(0)
+
+        self.push_screen(ConfirmDialog("The scenario has edits that are not saved. Quit anyway?",
+                                       yes="Quit without saving"), answer)
+
+
+def run_app(path: str | None = None) -> int:
+    """Run the interface on ``path`` (or the demo); returns the exit status."""
+    result = Co2RoutesApp(path).run()
+    return int(result or 0)

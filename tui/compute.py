@@ -1,0 +1,142 @@
+"""What the interface's workers compute: the ranking, the cost-against-demand sweep and the points
+of the saturation chart. Every number comes from :mod:`sources` or :mod:`thermo`; this module
+only calls them and samples curves, and it imports no widget so it is tested in plain pytest.
+
+These functions run in thread workers, off the start-up path: the first call imports pint, the
+route models and, through them, CoolProp and Cantera.
+"""
+
+from __future__ import annotations
+
+import dataclasses
+import time
+from dataclasses import dataclass
+from typing import Any, Mapping, Sequence
+
+#: Multiples of the scenario's demand the cost-against-demand chart is drawn at.
+SWEEP_FACTORS = (0.25, 0.5, 1.0, 2.0, 4.0, 8.0)
+
+
+@dataclass(frozen=True, slots=True)
+class Outcome:
+    """A validated scenario, its ranked comparison and how long the work took [s]."""
+
+    scenario: Any
+    comparison: Any
+    seconds: float
+
+
+@dataclass(frozen=True, slots=True)
+class Sweep:
+    """Cost per kg of every route at several batch sizes; ``None`` where a price is unknown."""
+
+    co2_kg: tuple[float, ...]
+    cost_per_kg: Mapping[str, tuple[float | None, ...]]
+    labels: Mapping[str, str]
+    currency: str
+
+
+@dataclass(frozen=True, slots=True)
+class SaturationCurve:
+    """Liquid-vapour saturation line of CO2 (triple to critical point) and marked points.
+
+    ``marks`` are ``(label, temperature [K], pressure [Pa])``.
+    """
+
+    temperatures_k: tuple[float, ...]
+    pressures_pa: tuple[float, ...]
+    marks: tuple[tuple[str, float, float], ...]
+    notes: tuple[str, ...]
+
+
+def outcome(document: Mapping[str, Any], source: str, text: str | None = None,
+            routes: Sequence[Any] | None = None) -> Outcome:
+    """Validate ``document`` and rank every route for it (raises ``InputError`` on bad input)."""
+    from sources.compare import compare
+    from sources.scenario import validate
+
+    start = time.perf_counter()
+    scenario = validate(document, source, text)
+    comparison = compare(scenario, routes)
+    return Outcome(scenario, comparison, time.perf_counter() - start)
+
+
+def demand_sweep(scenario: Any, routes: Sequence[Any] | None = None,
+                 factors: Sequence[float] = SWEEP_FACTORS) -> Sweep:
+    """Cost per kg of each route when the batch is ``factor`` times the scenario's.
+
+    Each point is a full :func:`sources.compare.compare` of the scenario at that batch size, so
+    the chart shows exactly what the ranking would at that demand. A batch size that a route
+    refuses gives ``None`` for that route at that point.
+    """
+    from sources.compare import compare
+    from thermo.errors import InputError
+
+    sizes = tuple(scenario.co2_kg * f for f in factors)
+    costs: dict[str, list[float | None]] = {}
+    labels: dict[str, str] = {}
+    for i, size in enumerate(sizes):
+        try:
+            comparison = compare(dataclasses.replace(scenario, co2_kg=size), routes)
+        except InputError:
+            comparison = None
+        rows = {} if comparison is None else {row.result.route_id: row for row in comparison.rows}
+        for rid, row in rows.items():
+            labels.setdefault(rid, row.result.label)
+            costs.setdefault(rid, [None] * len(sizes))
+        for rid in costs:
+            costs[rid][i] = rows[rid].cost_per_kg if rid in rows else None
+    return Sweep(sizes, {k: tuple(v) for k, v in costs.items()}, labels, scenario.prices.currency)
+
+
+def saturation_curve(scenario: Any, points: int = 40) -> SaturationCurve:
+    """The saturation line with the condensing point and the storage point (a cylinder at the
+    site's temperature) marked; for dry ice, the normal sublimation point as well."""
+    from thermo import co2
+
+    low, high = co2.TRIPLE_TEMPERATURE_K + 0.01, co2.CRITICAL_TEMPERATURE_K - 0.01
+    temps = tuple(low + (high - low) * i / (points - 1) for i in range(points))
+    pressures = tuple(co2.saturation_at_temperature(t).pressure_pa for t in temps)
+    marks: list[tuple[str, float, float]] = []
+    notes: list[str] = []
+    for label, t in (("condensing", scenario.delivery.condensing_temperature_k),
+                     ("storage", scenario.site.temperature_k)):
+        if low <= t <= high:
+            marks.append((label, t, co2.saturation_at_temperature(t).pressure_pa))
+        elif t > high:
+            notes.append(f"{label} temperature {t - 273.15:.1f} degC is above the critical point: "
+                         "no liquid forms there at any pressure")
+        else:
+            notes.append(f"{label} temperature {t - 273.15:.1f} degC is below the triple point: "
+                         "CO2 is solid or gas there")
+    if scenario.end_product == "dry-ice":
+        marks.append(("dry ice, 1 atm", co2.NORMAL_SUBLIMATION_K, co2.ATMOSPHERE_PA))
+    return SaturationCurve(temps, pressures, tuple(marks), tuple(notes))
+
+
+def breakthrough_points(dryer: Any) -> tuple[tuple[float, ...], tuple[float, ...], str] | None:
+    """The breakthrough curve of a dryer result as ``(hours, outlet values, y label)``.
+
+    Reads ``breakthrough_curve`` from the dryer result: either an object with ``times_h`` and one
+    of ``outlet_ppmv`` / ``outlet_fraction`` / ``ratio``, or a sequence of ``(hours, value)``
+    pairs. ``None`` when the result carries no curve.
+    """
+    curve = getattr(dryer, "breakthrough_curve", None) if dryer is not None else None
+    if curve is None:
+        return None
+    times = getattr(curve, "times_h", None)
+    if times is not None:
+        for name, label in (("outlet_ppmv", "outlet water, ppmv"),
+                            ("outlet_fraction", "outlet / inlet water"),
+                            ("ratio", "outlet / inlet water")):
+            values = getattr(curve, name, None)
+            if values is not None:
+                return tuple(float(t) for t in times), tuple(float(v) for v in values), label
+        return None
+    try:
+        pairs = [(float(a), float(b)) for a, b in curve]
+    except (TypeError, ValueError):
+        return None
+    if not pairs:
+        return None
+    return tuple(p[0] for p in pairs), tuple(p[1] for p in pairs), "outlet / inlet water"

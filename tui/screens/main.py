@@ -1,0 +1,318 @@
+"""The planning screen: the scenario's inputs, the ranking of every route, the chosen route in
+detail, and its cautions, all at once.
+
+Every edit changes a copy of the scenario document and starts an exclusive thread worker that
+validates it and ranks the routes (:func:`tui.compute.outcome`); a refused value is marked under
+its field and the last good results stay on screen. Charts are worked out by a second worker
+after the ranking is shown. The first computation also runs in a worker, so the first frame is
+drawn before pint, the route models, CoolProp or Cantera are imported.
+"""
+
+from __future__ import annotations
+
+from typing import Any, Sequence
+
+from rich.text import Text
+from textual import on, work
+from textual.app import ComposeResult
+from textual.binding import Binding
+from textual.containers import Horizontal, Vertical
+from textual.screen import Screen
+from textual.widgets import Input, ProgressBar, Static
+from textual.worker import get_current_worker
+
+from tui.fields import BASE_FIELDS, Field, match_field, option_fields, price_fields, price_value
+from tui.screens.filing import Filing
+from tui.session import Opened, edited, value_at
+from tui.widgets.detail import TABS, CautionPanel, RouteDetail
+from tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
+from tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
+
+#: A computation slower than this [s] shows the progress bar.
+BUSY_AFTER_S = 0.2
+
+
+class MainScreen(Filing, Screen):
+    """The one working screen."""
+
+    CSS_PATH = "main.tcss"
+    BINDINGS = [
+        Binding("f1,question_mark", "app.keys", "keys and help"),
+        Binding("ctrl+s", "save", "save the scenario"),
+        Binding("ctrl+n", "save_as", "save the scenario under a new name"),
+        Binding("ctrl+o", "open", "open a scenario file"),
+        Binding("ctrl+t", "export_ranking", "export the ranking (.md .csv .json)"),
+        Binding("ctrl+b", "export_recipe", "export the chosen route's batch (.md .json)"),
+        Binding("ctrl+g", "next_pane", "go to the next pane: inputs, ranking, detail"),
+    ] + [Binding(str(i + 1), f"tab({i})", f"detail tab: {title}") for i, (_, title) in enumerate(TABS)]
+
+    def __init__(self, opened: Opened, routes: Sequence[Any] | None = None) -> None:
+        super().__init__()
+        self.opened = opened
+        #: the document as edited now (it may hold a refused value)
+        self.document: dict[str, Any] = dict(opened.document)
+        #: the last good :class:`tui.compute.Outcome`, ``None`` until one is worked out
+        self.outcome: Any = None
+        self.sweep: Any = None
+        self.curve: Any = None
+        self.routes = routes
+        self.dirty = False
+        self.generation = 0
+        self.book: Any = None
+        self._extras = False
+        self._busy_timer: Any = None
+
+    def compose(self) -> ComposeResult:
+        yield Static(id="title-line")
+        with Horizontal(id="body"):
+            form = ScenarioForm(id="form")
+            form.border_title = "Scenario"
+            yield form
+            with Vertical(id="results"):
+                table = RankingTable(id="ranking")
+                table.border_title = "Routes, best first"
+                yield table
+                yield Static(id="weights-line")
+                yield RouteDetail(id="detail")
+                cautions = CautionPanel(id="cautions")
+                cautions.border_title = "Cautions"
+                yield cautions
+        with Horizontal(id="status-line"):
+            yield Static("starting…", id="status")
+            yield ProgressBar(total=None, show_eta=False, show_percentage=False, id="busy")
+            yield Static("F1 keys  ^S save  ^O open  ^Q quit", id="key-hint")
+
+    def on_mount(self) -> None:
+        form = self.query_one(ScenarioForm)
+        form.add_fields(BASE_FIELDS, self.document)
+        self._title()
+        self.query_one("#busy").display = False
+        self.recompute(self.document, self.generation, None)
+
+    def on_resize(self) -> None:
+        self.set_class(self.size.width < 110, "-narrow")
+        self.set_class(self.size.height < 32, "-short")
+
+    # -- computing ------------------------------------------------------------------------
+
+    def start(self, edited_field: Field | None = None) -> None:
+        """Recompute for the current document (the previous run's answer is dropped)."""
+        self.generation += 1
+        self.recompute(self.document, self.generation, edited_field)
+
+    @work(exclusive=True, thread=True, group="compute")
+    def recompute(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
+        """Validate and rank (thread worker); hands the answer to the UI thread."""
+        from thermo.errors import InputError
+        from tui.compute import outcome
+
+        worker = get_current_worker()
+        self.app.call_from_thread(self._busy, generation)
+        if not self._extras:
+            self._extras = True
+            try:
+                self._load_extras()
+            except Exception as err:  # noqa: BLE001 - a broken price book or route must not stop the form
+                self.app.call_from_thread(self._say, f"could not list options and prices: {err}", True)
+        text = self.opened.text if document == self.opened.document else None
+        try:
+            result = outcome(document, self.opened.source, text, self.routes)
+        except InputError as err:
+            if not worker.is_cancelled:
+                self.app.call_from_thread(self._refused, generation, err, edited_field)
+            return
+        except Exception as err:  # noqa: BLE001 - a defect must not take the user's work with it
+            if not worker.is_cancelled:
+                self.app.call_from_thread(self._failed, generation, err)
+            return
+        if not worker.is_cancelled:
+            self.app.call_from_thread(self._computed, generation, result)
+
+    def _load_extras(self) -> None:
+        from sources.prices import load_book
+        from sources.registry import catalogue
+
+        routes = self.routes if self.routes is not None else catalogue().routes
+        self.book = load_book()
+        fields = option_fields(routes) + price_fields(self.book)
+        self.app.call_from_thread(self.query_one(ScenarioForm).add_fields, fields, self.document)
+
+    @work(exclusive=True, thread=True, group="charts")
+    def redraw_charts(self, outcome: Any, generation: int) -> None:
+        """Work out the cost-against-batch sweep and the saturation line (thread worker)."""
+        from tui.compute import demand_sweep, saturation_curve
+
+        worker = get_current_worker()
+        try:
+            curve = saturation_curve(outcome.scenario)
+        except Exception as err:  # noqa: BLE001
+            curve = None
+            self.app.call_from_thread(self._say, f"saturation chart: {err}", True)
+        if worker.is_cancelled:
+            return
+        self.app.call_from_thread(self._charts, generation, None, curve)
+        sweep = demand_sweep(outcome.scenario, self.routes)
+        if not worker.is_cancelled:
+            self.app.call_from_thread(self._charts, generation, sweep, curve)
+
+    def _busy(self, generation: int) -> None:
+        if self._busy_timer is None:
+            self._busy_timer = self.set_timer(BUSY_AFTER_S, self._show_busy)
+
+    def _show_busy(self) -> None:
+        self.query_one("#busy").display = True
+        self._say("working out every route…")
+
+    def _idle(self) -> None:
+        if self._busy_timer is not None:
+            self._busy_timer.stop()
+            self._busy_timer = None
+        self.query_one("#busy").display = False
+
+    def _refused(self, generation: int, err: Any, edited_field: Field | None) -> None:
+        if generation != self.generation:
+            return
+        self._idle()
+        form = self.query_one(ScenarioForm)
+        field = match_field(form.fields, err.field) or edited_field
+        reason = err.allowed + (f" (got {err.got})" if err.got is not None else "")
+        if edited_field is not None and field is not edited_field:
+            form.mark(edited_field, None)
+        if field is not None and form.row_of(field) is not None:
+            form.mark(field, reason if field is not edited_field or field.dotted in err.field
+                      else f"{err.field}: {reason}")
+        kept = "kept the last good results" if self.outcome else "no results yet"
+        self._say(f"{err} — {kept}", True)
+
+    def _failed(self, generation: int, err: Exception) -> None:
+        if generation != self.generation:
+            return
+        self._idle()
+        self._say(f"could not work this out ({type(err).__name__}: {err}); kept the last good results", True)
+
+    def _computed(self, generation: int, outcome: Any) -> None:
+        if generation != self.generation:
+            return
+        self._idle()
+        self.outcome = outcome
+        self.query_one(ScenarioForm).clear_marks()
+        comparison = outcome.comparison
+        self.query_one(RankingTable).show(comparison.rows)
+        self._weights_line()
+        self._show_selected()
+        self._title()
+        note = f"; {len(comparison.failures)} route(s) left out: " + " | ".join(comparison.failures) \
+            if comparison.failures else ""
+        self._say(f"{len(comparison.rows)} routes ranked in {outcome.seconds:.2f} s{note}",
+                  bool(comparison.failures))
+        self.redraw_charts(outcome, generation)
+
+    def _charts(self, generation: int, sweep: Any, curve: Any) -> None:
+        if generation != self.generation:
+            return
+        detail = self.query_one(RouteDetail)
+        self.curve = curve
+        detail.show_saturation(curve)
+        if sweep is not None:
+            self.sweep = sweep
+            detail.show_curve(sweep, self.outcome.scenario.co2_kg if self.outcome else None)
+
+    # -- showing --------------------------------------------------------------------------
+
+    def selected_row(self) -> Any:
+        """The comparison row under the ranking's cursor (``None`` before any result)."""
+        if self.outcome is None:
+            return None
+        chosen = self.query_one(RankingTable).selected
+        rows = self.outcome.comparison.rows
+        return next((r for r in rows if r.result.route_id == chosen), rows[0] if rows else None)
+
+    def _show_selected(self) -> None:
+        row = self.selected_row()
+        comparison = self.outcome.comparison
+        self.query_one(RouteDetail).show(row, comparison.currency, comparison.end_product)
+        self.query_one(CautionPanel).show(row)
+
+    def _weights_line(self) -> None:
+        weights = self.outcome.comparison.weights
+        table = self.query_one(RankingTable)
+        line = Text("weights ", style="bold")
+        for key, value in weights.items():
+            style = "reverse" if key == table.sort_key else ""
+            line.append(f"{key} {value:g}", style=style)
+            line.append("  ")
+        line.append("(sort: r c e t h w p z · weight: + -)", style="dim")
+        self.query_one("#weights-line", Static).update(line)
+
+    def _title(self) -> None:
+        name = str(self.document.get("name", "unnamed scenario"))
+        where = str(self.opened.path) if self.opened.path else "invented demo, not yet saved"
+        mark = "  ● edited" if self.dirty else ""
+        self.query_one("#title-line", Static).update(
+            Text.assemble(("co2routes ", "bold"), ("│ ", "dim"), name, ("  │ ", "dim"), (where, "italic"),
+                          (mark, "bold")))
+
+    def _say(self, message: str, warn: bool = False) -> None:
+        status = self.query_one("#status", Static)
+        status.update(Text(message, style="bold" if warn else ""))
+        status.set_class(warn, "-warn")
+
+    # -- events ---------------------------------------------------------------------------
+
+    @on(FieldEdited)
+    def _edited(self, event: FieldEdited) -> None:
+        f = event.field
+        value = price_value(self.book, f.keys[-1], event.text) if f.keys[0] == "prices" \
+            else f.to_document(event.text)
+        new = edited(self.document, f.keys, value)
+        if new == self.document:
+            return
+        self.document = new
+        self.dirty = True
+        self._title()
+        self.start(f)
+
+    @on(RouteChosen)
+    def _chosen(self, event: RouteChosen) -> None:
+        if self.outcome is not None:
+            self._show_selected()
+
+    @on(WeightNudged)
+    def _nudged(self, event: WeightNudged) -> None:
+        from sources.scenario import DEFAULT_WEIGHTS
+
+        keys = ("weights", event.criterion)
+        now = value_at(self.document, keys)
+        base = now if isinstance(now, (int, float)) else DEFAULT_WEIGHTS[event.criterion]
+        value = max(0.0, float(base) + event.delta)
+        self.document = edited(self.document, keys, value)
+        self.dirty = True
+        form = self.query_one(ScenarioForm)
+        for row in form.query(FieldRow):
+            if row.field.keys == keys:
+                box = row.query_one(Input)
+                with box.prevent(Input.Changed):
+                    box.value = row.field.to_text(value)
+        self._title()
+        self._say(f"weight of {event.criterion} now {value:g}")
+        self.start()
+
+    def action_tab(self, index: int) -> None:
+        """Open detail tab ``index``."""
+        self.query_one(RouteDetail).pick(index)
+
+    def action_next_pane(self) -> None:
+        """Move the focus to the next pane: inputs, ranking, detail tabs."""
+        panes = [self.query_one(ScenarioForm), self.query_one(RankingTable), self.query_one(RouteDetail)]
+        focused = self.focused
+        current = next((i for i, p in enumerate(panes) if focused is not None
+                        and (focused is p or p in focused.ancestors)), -1)
+        target = panes[(current + 1) % len(panes)]
+        if isinstance(target, ScenarioForm):
+            boxes = target.query(Input)
+            if boxes:
+                boxes.first().focus()
+        elif isinstance(target, RouteDetail):
+            target.query_one("Tabs").focus()
+        else:
+            target.focus()

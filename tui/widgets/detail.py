@@ -1,0 +1,212 @@
+"""The selected route in full: the batch as bought, heat, raw gas and dryer, delivery, costs,
+and the cost-against-batch chart for every route. The cautions sit in their own panel beside it
+(:class:`CautionPanel`) so they stay on screen whichever tab is open.
+
+Dryer and delivery results are shown when the comparison row carries them (``row.dryer``,
+``row.delivery``); their numeric fields are laid out by the unit in their names.
+"""
+
+from __future__ import annotations
+
+import dataclasses
+from typing import Any
+
+from rich.console import Group
+from rich.table import Table
+from rich.text import Text
+from textual.app import ComposeResult
+from textual.containers import Horizontal, Vertical, VerticalScroll
+from textual.widgets import Static, TabbedContent, TabPane
+
+from sources.compare import heat_words
+from thermo.cautions import LOCAL_CODES
+from tui.compute import breakthrough_points
+from tui.output import format_value, label_of
+from tui.widgets import css_of
+from tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, SaturationPlot
+
+#: The tabs, in order: (id, title). Digits 1-5 pick them.
+TABS = (("t-batch", "Batch"), ("t-gas", "Gas & dryer"), ("t-delivery", "Delivery"),
+        ("t-costs", "Costs"), ("t-curve", "Cost vs batch"))
+
+
+def _table(*headings: str) -> Table:
+    table = Table(*headings, box=None, pad_edge=False, show_edge=False, header_style="bold")
+    return table
+
+
+def _n(value: float | None, fmt: str = "{:.3f}") -> str:
+    return "unknown" if value is None else fmt.format(value)
+
+
+def facts(obj: Any, skip: tuple[str, ...] = ()) -> Table:
+    """The numeric and text fields of a result dataclass as ``label  value`` lines, units taken
+    from the field names (``_kg``, ``_pa``, ``_k`` ...)."""
+    table = _table("", "")
+    table.show_header = False
+    if obj is None or not dataclasses.is_dataclass(obj):
+        return table
+    for f in dataclasses.fields(obj):
+        value = getattr(obj, f.name)
+        if f.name in skip or f.name in ("warnings", "cautions") or isinstance(value, (tuple, list, dict)):
+            continue
+        if dataclasses.is_dataclass(value):
+            continue
+        label, _ = label_of(f.name)
+        table.add_row(Text(label, style="dim"), format_value(f.name, value))
+    return table
+
+
+def recipe(row: Any, currency: str) -> Group:
+    """The Batch tab: what to buy and weigh, what is left, heat, time and energy."""
+    r = row.result
+    buy = _table("buy and weigh", "formula", "kg", "L", "pure kg", currency)
+    costs = {line.item: line.cost for line in r.costs}
+    for g in r.reagents:
+        buy.add_row(g.name, g.formula, _n(g.mass_kg), "–" if g.volume_l is None else f"{g.volume_l:.2f}",
+                    _n(g.pure_mass_kg),
+                    _n(costs.get(g.name), "{:.2f}"))
+    parts: list[Any] = [Text(f"{r.label}: {r.co2_kg:.3f} kg CO2 delivered, {r.co2_generated_kg:.3f} kg made",
+                             style="bold"), buy]
+    if r.byproducts:
+        left = _table("left over", "formula", "kg", "note")
+        for b in r.byproducts:
+            left.add_row(b.name, b.formula, _n(b.mass_kg), b.note)
+        parts += [Text(""), left]
+    dt = r.temperature_change_k
+    heat = Text.assemble(("heat ", "bold"), f"{r.heat_kj:+.1f} kJ: {heat_words(r.heat_kj)}")
+    if dt is not None:
+        heat.append(f"; the liquor {'warms' if dt > 0 else 'cools'} by {abs(dt):.1f} K")
+    parts += [Text(""), heat,
+              Text(f"time {r.time_h:.1f} h   energy {r.energy.electricity_kwh:.3f} kWh electric, "
+                   f"{r.energy.fuel_kwh:.3f} kWh fuel, {r.energy.heat_kwh:.3f} kWh heat")]
+    parts += [Text(f"note: {n}", style="italic") for n in r.notes]
+    return Group(*parts)
+
+
+def gas(row: Any) -> Group:
+    """The Gas & dryer tab's text: raw gas composition and the dryer bed."""
+    r = row.result
+    mix = _table("raw gas", "mol %")
+    for name, x in sorted(r.raw_gas.mole_fractions.items(), key=lambda kv: -kv[1]):
+        mix.add_row(name, f"{x * 100:.2f}")
+    parts: list[Any] = [mix, Text(f"at {format_value('t_k', r.raw_gas.temperature_k)}, "
+                                  f"{format_value('p_pa', r.raw_gas.pressure_pa)}"),
+                        Text(f"water carried {r.water_g_per_kg_co2:.1f} g per kg CO2"), Text("")]
+    dryer = getattr(row, "dryer", None)
+    if dryer is None:
+        parts.append(Text("dryer bed: not sized for this route (no dryer result)", style="dim"))
+    else:
+        parts += [Text("dryer bed", style="bold"), facts(dryer, skip=("breakthrough_curve",))]
+        parts += [Text(f"! {w}", style="yellow") for w in getattr(dryer, "warnings", ())]
+    return Group(*parts)
+
+
+def delivery(row: Any, end_product: str) -> Group:
+    """The Delivery tab's text: compression, storage and dry ice when the scenario asks."""
+    r = row.result
+    parts: list[Any] = [Text(f"end product {end_product}; this route hands over {r.delivers}", style="bold")]
+    result = getattr(row, "delivery", None)
+    if result is None:
+        need = "none needed: gas at about 1 atm" if end_product == "gas" else "no delivery result"
+        parts.append(Text(f"compression, storage, dry ice: {need}", style="dim"))
+        return Group(*parts)
+    parts.append(facts(result))
+    for f in dataclasses.fields(result) if dataclasses.is_dataclass(result) else ():
+        value = getattr(result, f.name)
+        if dataclasses.is_dataclass(value):
+            parts += [Text(label_of(f.name)[0], style="bold"), facts(value)]
+    parts += [Text(f"! {w}", style="yellow") for w in getattr(result, "warnings", ())]
+    return Group(*parts)
+
+
+def breakdown(row: Any, currency: str) -> Group:
+    """The Costs tab's text: each line of the cost roll-up and the total per kg."""
+    r = row.result
+    table = _table("item", "amount", "unit", f"{currency}/unit", currency)
+    for line in r.costs:
+        table.add_row(line.item, _n(line.amount), line.unit, _n(line.unit_price, "{:.4g}"),
+                      _n(line.cost, "{:.2f}"))
+    total = r.total_cost
+    parts: list[Any] = [table, Text(f"batch {_n(total, '{:.2f}')} {currency}, "
+                                    f"{_n(r.cost_per_kg, '{:.2f}')} {currency} per kg CO2", style="bold")]
+    if total is None:
+        parts.append(Text("a price is unknown: give it under Prices in the form", style="yellow"))
+    return Group(*parts)
+
+
+class CautionPanel(VerticalScroll):
+    """Hazard, warnings and cautions of the selected route, and the reminder about local codes."""
+
+    DEFAULT_CSS = css_of(__file__, "cautions.tcss")
+
+    def compose(self) -> ComposeResult:
+        yield Static(Text(LOCAL_CODES), id="caution-text")
+
+    def show(self, row: Any | None) -> None:
+        """Show the cautions of ``row`` (always with the local-codes reminder)."""
+        lines: list[Any] = [Text("⚠ Cautions", style="bold")]
+        if row is not None:
+            r = row.result
+            lines.append(Text.assemble(("hazard ", "bold"), (f"{r.hazard}", "bold"), f": {r.hazard_reason}"))
+            lines += [Text(f"! {w}", style="yellow") for w in r.warnings]
+            for extra in (getattr(row, "dryer", None), getattr(row, "delivery", None)):
+                lines += [Text(f"• {c}") for c in getattr(extra, "cautions", ())]
+            lines += [Text(f"• {c}") for c in r.cautions]
+        lines.append(Text(LOCAL_CODES, style="bold"))
+        self.query_one("#caution-text", Static).update(Group(*lines))
+
+
+class RouteDetail(Vertical):
+    """The tabs of the selected route."""
+
+    DEFAULT_CSS = css_of(__file__)
+
+    def compose(self) -> ComposeResult:
+        with TabbedContent(id="detail-tabs"):
+            with TabPane(TABS[0][1], id=TABS[0][0]):
+                yield VerticalScroll(Static(id="recipe"))
+            with TabPane(TABS[1][1], id=TABS[1][0]):
+                with Horizontal(classes="split"):
+                    yield VerticalScroll(Static(id="gas"), Bars(id="gas-bars"))
+                    yield BreakthroughPlot(id="breakthrough")
+            with TabPane(TABS[2][1], id=TABS[2][0]):
+                with Horizontal(classes="split"):
+                    yield VerticalScroll(Static(id="delivery"))
+                    yield SaturationPlot(id="saturation")
+            with TabPane(TABS[3][1], id=TABS[3][0]):
+                with Horizontal(classes="split"):
+                    yield VerticalScroll(Static(id="costs"))
+                    yield Bars(id="cost-bars")
+            with TabPane(TABS[4][1], id=TABS[4][0]):
+                yield CostCurve(id="cost-curve")
+
+    def show(self, row: Any | None, currency: str, end_product: str) -> None:
+        """Fill every tab from ``row`` (a comparison row), or say that nothing is selected."""
+        if row is None:
+            for name in ("recipe", "gas", "delivery", "costs"):
+                self.query_one(f"#{name}", Static).update(Text("no route to show", style="dim"))
+            return
+        self.query_one("#recipe", Static).update(recipe(row, currency))
+        self.query_one("#gas", Static).update(gas(row))
+        self.query_one("#delivery", Static).update(delivery(row, end_product))
+        self.query_one("#costs", Static).update(breakdown(row, currency))
+        r = row.result
+        mix = sorted(r.raw_gas.mole_fractions.items(), key=lambda kv: -kv[1])
+        self.query_one("#gas-bars", Bars).draw("raw gas, mol %", [k for k, _ in mix], [v * 100 for _, v in mix])
+        self.query_one("#cost-bars", Bars).draw(f"cost of one batch, {currency}", [c.item for c in r.costs],
+                                                [c.cost for c in r.costs])
+        self.query_one("#breakthrough", BreakthroughPlot).draw(breakthrough_points(getattr(row, "dryer", None)))
+
+    def show_curve(self, sweep: Any, current_kg: float | None) -> None:
+        """Draw the cost-against-batch chart."""
+        self.query_one("#cost-curve", CostCurve).draw(sweep, current_kg)
+
+    def show_saturation(self, curve: Any) -> None:
+        """Draw the saturation line chart."""
+        self.query_one("#saturation", SaturationPlot).draw(curve)
+
+    def pick(self, index: int) -> None:
+        """Open tab number ``index`` (0-based)."""
+        if 0 <= index < len(TABS):
+            self.query_one("#detail-tabs", TabbedContent).active = TABS[index][0]

@@ -1,0 +1,176 @@
+"""The ranking: every route in one table, sortable by each criterion, and the weights line.
+
+The table shows the numbers of :class:`sources.compare.Comparison` rows as they are; sorting only
+changes the order shown, never the rank (which comes from the weighted score). Moving the cursor
+selects a route (:class:`RouteChosen`); ``+`` / ``-`` change the weight of the criterion the
+table is sorted by (:class:`WeightNudged`).
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from typing import Any, Callable
+
+from rich.text import Text
+from textual import on
+from textual.binding import Binding
+from textual.message import Message
+from textual.widgets import DataTable
+
+from tui.widgets import css_of
+
+
+@dataclass
+class RouteChosen(Message):
+    """The cursor is on route ``route_id``."""
+
+    route_id: str
+
+
+@dataclass
+class WeightNudged(Message):
+    """The user asked to raise (``delta`` > 0) or lower the weight of ``criterion``."""
+
+    criterion: str
+    delta: float
+
+
+def _heat_per_kg(row: Any) -> float:
+    return row.result.heat_kj / row.result.co2_kg
+
+
+@dataclass(frozen=True)
+class Column:
+    """A column: key, heading, value read off a row, format, and the sort order that puts the
+    best first (``True``: larger is better). ``criterion`` is the weight it stands for."""
+
+    key: str
+    heading: str
+    read: Callable[[Any], Any]
+    fmt: str
+    larger_better: bool = False
+    criterion: str | None = None
+    sort_by: Callable[[Any], Any] | None = None
+
+
+COLUMNS: tuple[Column, ...] = (
+    Column("rank", "#", lambda r: r.rank, "{:d}"),
+    Column("route", "route", lambda r: r.result.label, "{}"),
+    Column("cost", "cost/kg", lambda r: r.cost_per_kg, "{:.2f}", criterion="cost"),
+    Column("energy", "kWh/kg", lambda r: r.result.energy_kwh_per_kg, "{:.2f}", criterion="energy"),
+    Column("time", "hours", lambda r: r.result.time_h, "{:.1f}", criterion="time"),
+    Column("heat", "kJ/kg", _heat_per_kg, "{:+.0f}", criterion="heat",
+           sort_by=lambda r: abs(_heat_per_kg(r))),
+    Column("water", "H2O g/kg", lambda r: r.result.water_g_per_kg_co2, "{:.1f}", criterion="water"),
+    Column("purity", "CO2 %", lambda r: r.result.raw_gas.co2_mole_fraction, "{:.1%}", True,
+           criterion="purity"),
+    Column("hazard", "hazard", lambda r: r.result.hazard, "{:d}", criterion="hazard"),
+    Column("score", "score", lambda r: r.score, "{:.3f}"),
+)
+COLUMN_BY_KEY = {c.key: c for c in COLUMNS}
+
+
+def cell_text(column: Column, row: Any) -> str:
+    """The text of one cell (``unknown`` when the value is).
+
+    >>> cell_text(COLUMN_BY_KEY["rank"], type("R", (), {"rank": 2})())
+    '2'
+    """
+    value = column.read(row)
+    if value is None:
+        return "unknown"
+    try:
+        return column.fmt.format(value)
+    except (TypeError, ValueError):
+        return str(value)
+
+
+class RankingTable(DataTable):
+    """The routes, one per line, best rank first until the user sorts by a column."""
+
+    DEFAULT_CSS = css_of(__file__)
+    BINDINGS = [
+        Binding("r", "sort('rank')", "order by rank"),
+        Binding("c", "sort('cost')", "sort by cost per kg"),
+        Binding("e", "sort('energy')", "sort by energy per kg"),
+        Binding("t", "sort('time')", "sort by time"),
+        Binding("h", "sort('heat')", "sort by heat per kg"),
+        Binding("w", "sort('water')", "sort by water load"),
+        Binding("p", "sort('purity')", "sort by CO2 purity"),
+        Binding("z", "sort('hazard')", "sort by hazard"),
+        Binding("plus,equals_sign", "nudge(0.5)", "weigh the sorted criterion more"),
+        Binding("minus", "nudge(-0.5)", "weigh the sorted criterion less"),
+    ]
+
+    def __init__(self, **kwargs: Any) -> None:
+        super().__init__(cursor_type="row", zebra_stripes=True, **kwargs)
+        self.rows_shown: list[Any] = []
+        self.sort_key = "rank"
+        self.descending = False
+        self.selected: str | None = None
+
+    def on_mount(self) -> None:
+        for column in COLUMNS:
+            self.add_column(column.heading, key=column.key)
+
+    def show(self, rows: tuple[Any, ...]) -> None:
+        """Show ``rows`` (a comparison's rows) in the current sort order, keeping the selection."""
+        self._all = tuple(rows)
+        column = COLUMN_BY_KEY[self.sort_key]
+        reverse = self.descending != column.larger_better
+        key = column.sort_by or column.read
+
+        def order(row: Any) -> tuple[int, Any]:
+            value = key(row)
+            return (1, 0) if value is None else (0, -value if reverse and isinstance(value, (int, float)) else value)
+
+        ordered = sorted(rows, key=order)
+        if reverse and column.key == "route":
+            ordered.reverse()
+        self.rows_shown = ordered
+        self.clear()
+        for row in ordered:
+            cells = []
+            for c in COLUMNS:
+                text = cell_text(c, row)
+                style = "bold" if row.rank == 1 else ""
+                cells.append(Text(text, style=style, justify="left" if c.key == "route" else "right"))
+            self.add_row(*cells, key=row.result.route_id)
+        self._label_headers()
+        if ordered:
+            ids = [r.result.route_id for r in ordered]
+            index = ids.index(self.selected) if self.selected in ids else 0
+            self.move_cursor(row=index, animate=False)
+            self.selected = ids[index]
+
+    def _label_headers(self) -> None:
+        for c in COLUMNS:
+            mark = (" ▼" if self.descending else " ▲") if c.key == self.sort_key else ""
+            self.columns[c.key].label = Text(c.heading + mark)
+        self.refresh()
+
+    def action_sort(self, key: str) -> None:
+        """Sort by column ``key``; the same key again turns the order round."""
+        self.descending = not self.descending if key == self.sort_key else False
+        self.sort_key = key
+        self.show(getattr(self, "_all", ()))
+
+    def action_nudge(self, delta: float) -> None:
+        """Raise or lower the weight of the criterion the table is sorted by."""
+        criterion = COLUMN_BY_KEY[self.sort_key].criterion
+        if criterion is None:
+            self.notify("Sort by a criterion column first (c e t h w p z), then + or -.",
+                        severity="warning", timeout=4)
+            return
+        self.post_message(WeightNudged(criterion, delta))
+
+    @on(DataTable.RowHighlighted)
+    def _highlighted(self, event: DataTable.RowHighlighted) -> None:
+        if event.row_key is not None and event.row_key.value is not None:
+            self.selected = str(event.row_key.value)
+            self.post_message(RouteChosen(self.selected))
+
+    @on(DataTable.HeaderSelected)
+    def _header(self, event: DataTable.HeaderSelected) -> None:
+        event.stop()
+        self.action_sort(str(event.column_key.value))
