@@ -276,35 +276,31 @@ def extrapolation_warning(desiccant: Desiccant, water_pressure_pa: float,
             "an extrapolation.")
 
 
-def outlet_limit(d: Desiccant, t_in: float, p: float, target_ppmv: float) -> tuple[float, float]:
+def outlet_limit(d: Desiccant, t_in: float) -> tuple[float, float]:
     """Lowest outlet water pressure [Pa] and residual loading [kg/kg] after regeneration.
 
     The residual is the equilibrium loading at the regeneration temperature under a purge of
-    product gas (``target_ppmv`` at pressure ``p``); the outlet cannot be drier than the water
-    pressure over that residual at bed temperature ``t_in``, nor than
-    :func:`outlet_floor_pressure`. Salts are replaced fresh: no residual.
+    product gas as dry as the bed delivers (water at :func:`outlet_floor_pressure`); the outlet
+    cannot be drier than the water pressure over that residual at bed temperature ``t_in``, nor
+    than the floor itself. Salts are replaced fresh: no residual.
 
     Parameters
     ----------
     d : Desiccant
     t_in : float
         Bed (inlet gas) temperature [K].
-    p : float
-        Bed and purge pressure [Pa].
-    target_ppmv : float
-        Water in the product used as purge [ppmv].
 
     Sources: the isotherms of each row (extrapolated to the regeneration temperature, beyond the
     fitted range) and the practice floors (from memory).
 
-    >>> p_out, res = outlet_limit(get_desiccant("molecular-sieve-13x"), 298.15, 101325.0, 20.0)
+    >>> p_out, res = outlet_limit(get_desiccant("molecular-sieve-13x"), 298.15)
     >>> round(p_out, 3), res < 1e-4
     (0.122, True)
     """
     floor = outlet_floor_pressure(d, t_in)
     if not d.regenerable:
         return floor, 0.0
-    residual = equilibrium_loading(d, target_ppmv * 1e-6 * p, d.regeneration_temperature_k)
+    residual = equilibrium_loading(d, floor, d.regeneration_temperature_k)
     if residual > 0.0:
         floor = max(floor, water_pressure_for_loading(d, residual, t_in))
     return floor, residual
@@ -318,7 +314,7 @@ def suggest_desiccant(t_in: float, p: float, target_ppmv: float, exclude: str = 
     'molecular-sieve-3a'
     """
     for name in PREFERENCE:
-        if name != exclude and outlet_limit(get_desiccant(name), t_in, p, target_ppmv)[0] \
+        if name != exclude and outlet_limit(get_desiccant(name), t_in)[0] \
                 <= target_ppmv * 1e-6 * p * (1 + 1e-9):
             return name
     return None

@@ -4,13 +4,14 @@ Method (one fixed bed, downflow, sized for one adsorption period):
 
 1. Water taken up per cycle from the inlet and outlet water contents (ideal mixing).
 2. Equilibrium loading at the inlet (the desiccant's isotherm, :mod:`thermo.desiccants`) less the
-   residual left by regeneration with a purge of dried product gas at the regeneration
-   temperature: the working capacity.
-3. Saturated-zone length from the water load; plus a mass-transfer-zone (MTZ) allowance,
+   residual left by regeneration with a purge of product gas (as dry as the bed delivers) at the
+   regeneration temperature: the working capacity.
+3. Saturated-zone length from the water load; plus a mass-transfer-zone (MTZ) allowance
    L_MTZ = (v/35 ft/min)^0.3 Z with Z = 1.70 ft for 1/8-in particles (0.85 ft for 1/16-in; taken
    proportional to particle size): GPSA Engineering Data Book, 12th ed. (2004), sec. 20 (from
    memory); the saturated zone + MTZ design is the one of Abdel-Aal, Aggour & Fahim (2003)
-   Petroleum and Gas Field Processing, dehydration chapter, after Campbell.
+   Petroleum and Gas Field Processing, dehydration chapter, after Campbell. When the target is
+   tighter than the zone's 5 % edge, the stretch of front between 5 % and the target is added.
 4. Diameter from the user, from a length-to-diameter ratio (default 3, common practice), or
    widened so the superficial velocity stays below the velocity at which the Ergun gradient
    reaches 0.33 psi/ft (7.47 kPa/m), the design gradient for downflow beds (GPSA sec. 20, from
@@ -139,9 +140,17 @@ class DryerResult:
     cautions: tuple[str, ...]
 
 
-def _inlet_ppmv(inp: DryerInput, p_sat: float) -> float:
-    """Inlet water [ppmv] from whichever inlet field is set (saturated when none)."""
+def inlet_ppmv(inp: DryerInput) -> float:
+    """Inlet water [ppmv] from whichever inlet field of ``inp`` is set (saturated when none).
+
+    ppmv = 1e6 RH p_sat(T)/P, 1e6 p_sat(T_dp)/P, as given, or 1e6 p_sat(T)/P (saturated); p_sat
+    from :mod:`thermo.water` (IAPWS-95; Murphy & Koop 2005 below 0 degC).
+
+    >>> round(inlet_ppmv(DryerInput(1e-5, 298.15, inlet_relative_humidity=0.5)))
+    15642
+    """
     t, p = inp.inlet_temperature_k, inp.inlet_pressure_pa
+    p_sat = water.vapor_pressure(t)
     given = [n for n in ("inlet_water_ppmv", "inlet_relative_humidity", "inlet_dew_point_k")
              if getattr(inp, n) is not None]
     if len(given) > 1:
@@ -213,7 +222,7 @@ def size_dryer(inp: DryerInput) -> DryerResult:
     if p_sat >= p:
         raise InputError("inlet pressure", "must be above the water vapour pressure at the inlet "
                          f"temperature ({p_sat:.6g} Pa)", got=p)
-    y_in = _inlet_ppmv(inp, p_sat) * 1e-6
+    y_in = inlet_ppmv(inp) * 1e-6
     target, basis = _target_ppmv(inp)
     y_t = target * 1e-6
     if y_t >= y_in:
@@ -221,7 +230,7 @@ def size_dryer(inp: DryerInput) -> DryerResult:
                          f"({y_in * 1e6:.6g} ppmv, dew point {water.dew_point(y_in * p) - 273.15:.1f} degC)",
                          got=f"{target:.6g} ppmv")
     warnings: list[str] = []
-    p_out, q_res = outlet_limit(d, t_in, p, target)
+    p_out, q_res = outlet_limit(d, t_in)
     if p_out >= y_in * p:
         raise InputError("desiccant", f"{d.id} cannot dry this gas: its outlet floor "
                          f"({p_out:.4g} Pa of water) is above the inlet's ({y_in * p:.4g} Pa)")
@@ -295,7 +304,9 @@ def size_dryer(inp: DryerInput) -> DryerResult:
     k = (interpolate(0.95, xs, kt) - interpolate(0.05, xs, kt)) / (l_mtz / v_front)
     x_b = (y_t - y_out) / (y_in - y_out) if reaches else 0.05
     x_b = max(x_b, xs[0])
-    length = l_sat + l_mtz
+    # GPSA's zone allowance keeps half a zone of margin at the front's 5 % edge; the same margin
+    # is kept at the target concentration by adding the stretch of front between the two.
+    length = l_sat + l_mtz + v_front * (interpolate(0.05, xs, kt) - interpolate(x_b, xs, kt)) / k
     t_b = length / v_front + interpolate(x_b, xs, kt) / k
     if t_b < cycle:
         length += (cycle - t_b) * v_front
@@ -421,7 +432,10 @@ def breakthrough_curve(inp: DryerInput, result: DryerResult | None = None,
     t_of = [r.stoichiometric_time_s + v / r.front_rate_per_s for v in kt]
     start = max(0.0, interpolate(1e-6, xs, t_of))
     end = interpolate(1.0 - 1e-6, xs, t_of)
-    times = [0.0] + [start + (end - start) * i / (points - 2) for i in range(points - 1)]
+    if start > 0.0:
+        times = [0.0] + [start + (end - start) * i / (points - 2) for i in range(points - 1)]
+    else:
+        times = [end * i / (points - 1) for i in range(points)]
     out = []
     for t in times:
         x = 0.0 if t <= t_of[0] else (1.0 if t >= t_of[-1] else interpolate(t, t_of, xs))
@@ -431,4 +445,4 @@ def breakthrough_curve(inp: DryerInput, result: DryerResult | None = None,
 
 
 __all__ = ["DryerInput", "DryerResult", "CurvePoint", "size_dryer", "breakthrough_curve",
-           "mtz_length", "ISBT_WATER_PPMV", "DESICCANT_IDS"]
+           "inlet_ppmv", "ISBT_WATER_PPMV", "DESICCANT_IDS"]

@@ -122,3 +122,39 @@ def gas_state(temperature_k: float, pressure_pa: float, composition: Mapping[str
         molar_mass_kg_mol=m_mix,
         compressibility=z_mix,
     )
+
+
+def co2_flow_from_volume_flow(volume_flow_m3_s: float, temperature_k: float, pressure_pa: float,
+                              water_ppmv: float, dry_composition: Mapping[str, float]) -> float:
+    """CO2 mass flow [kg/s] in a volume flow of wet gas measured at its own T and P.
+
+    m_CO2 = Q rho M_CO2 (1 - y_w) y_CO2,dry / M_wet, with rho and M_wet of the wet mixture from
+    :func:`gas_state` (mixture rules in the module notes).
+
+    Parameters
+    ----------
+    volume_flow_m3_s : float
+        Actual volume flow Q [m3/s] at T and P, above 0.
+    temperature_k, pressure_pa : float
+        Gas temperature [K] and absolute pressure [Pa] where Q is measured.
+    water_ppmv : float
+        Water in the gas [ppmv], 0 or more.
+    dry_composition : mapping
+        Mole fractions of the dry gas (must include CO2).
+
+    Sources: as :func:`gas_state`.
+
+    >>> round(co2_flow_from_volume_flow(1e-3 / 60, 298.15, 101325.0, 0.0, {"CO2": 1.0}) * 3.6e6, 1)
+    108.5
+    """
+    q = require_positive("flow", volume_flow_m3_s)
+    y_w = water_ppmv * 1e-6
+    if not 0.0 <= y_w < 1.0:
+        raise InputError("inlet water", "must be from 0 to below 1,000,000 ppmv", got=water_ppmv)
+    dry = normalise(dry_composition)
+    wet = {k: v * (1.0 - y_w) for k, v in dry.items()}
+    if y_w > 0.0:
+        wet["H2O"] = wet.get("H2O", 0.0) + y_w
+    gas = gas_state(temperature_k, pressure_pa, wet)
+    molar_flow = q * gas.density_kg_m3 / gas.molar_mass_kg_mol
+    return molar_flow * (1.0 - y_w) * dry.get("CO2", 0.0) * SPECIES["CO2"][1]
