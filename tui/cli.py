@@ -25,6 +25,7 @@ COMMANDS: tuple[str, ...] = (
     "snow",
     "liquefy",
     "moisture",
+    "dryer",
     "reaction",
     "calcination",
 )
