@@ -189,7 +189,7 @@ def check_charge(volume_m3: float, mass_kg: float, *, force: bool = False,
               "device vents or the cylinder bursts.")
     if not force:
         raise InputError("mass", f"must be at most {limit:.3g} kg for {volume_m3 * 1000:.3g} L "
-                         f"({danger} Use force only if you know the cylinder is rated for it)",
+                         f"({danger} Refused unless forced, for a cylinder known to be rated for it)",
                          got=f"{mass_kg:.3g} kg")
     return (danger,)
 

@@ -82,7 +82,7 @@ def test_store_overfilled_and_over_rated(capsys):
     # 49 CFR 173.304a: 0.68 kg/L. 10 kg in 13.4 L (0.746 kg/L) at 30 degC is liquid-full at about
     # 90 bar (1314 psi): above a 1000 psi rating, so both warnings must appear
     answer = run_json(capsys, "store", "--volume", "13.4 L", "--mass", "10 kg", "--temperature",
-                      "30 degC", "--rated-pressure", "1000 psi")
+                      "30 degC", "--rated-pressure", "1000 psi", "--force")  # overfill refused without
     assert answer["phase"] == "liquid"
     assert any("0.68 kg/L" in w and "173.304a" in w for w in answer["warnings"])
     assert any("rated pressure" in w for w in answer["warnings"])
