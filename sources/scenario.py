@@ -19,6 +19,7 @@ Schema (every quantity a string with units)::
     [weights]   cost, energy, time, heat, water, purity, hazard (numbers >= 0)
     [options.ROUTE-ID]  KEY = "VALUE" for that route's options
     [prices]    KEY = "AMOUNT / UNIT" overriding the price book
+    [uncertain] "INPUT" = {dist = ..., ...}: spreads for what-if analysis (sources.whatif)
 """
 
 from __future__ import annotations
@@ -43,7 +44,7 @@ DEFAULT_WEIGHTS = {"cost": 3.0, "energy": 1.0, "time": 1.0, "heat": 0.5, "water"
                    "purity": 1.0, "hazard": 2.0}
 DEMOS = {"polytunnel": "demo-polytunnel.toml", "science-fair": "demo-science-fair.toml"}
 _TOP_KEYS = {"name", "note", "demand", "batch", "end_product", "currency", "site", "dryer",
-             "delivery", "weights", "options", "prices"}
+             "delivery", "weights", "options", "prices", "uncertain"}
 _SECTION_KEYS = {
     "site": {"temperature", "pressure", "air_co2"},
     "dryer": {"desiccant", "target_dew_point", "target_ppmv", "cycle"},

@@ -1,0 +1,115 @@
+"""``co2routes uncertainty [SCENARIO]``: Monte Carlo over every route at once."""
+
+from __future__ import annotations
+
+import argparse
+import sys
+
+NAME = "uncertainty"
+HELP = ("draw the inputs of the scenario's [uncertain] table (every price +/-25 % when it has none) "
+        "and give each route's cost per kg percentiles and its chance of being the cheapest")
+WANTS_FORMAT_FLAGS = True
+
+
+def add_arguments(parser: argparse.ArgumentParser) -> None:
+    """Options of ``uncertainty``."""
+    parser.add_argument("scenario", nargs="?", help="scenario TOML file (default: the invented demo)")
+    parser.add_argument("--samples", default="10000", metavar="N", help="number of samples (default 10000)")
+    parser.add_argument("--seed", default=None, metavar="S",
+                        help="seed of the random numbers, for a repeatable result (default: a fresh one, printed)")
+    parser.add_argument("--route", action="append", default=[], metavar="ID",
+                        help="only this route (repeat for more; default: every route)")
+
+
+def whole(text: str, option: str, least: int) -> int:
+    """A whole number of at least ``least`` from an option's text.
+
+    >>> whole("10000", "--samples", 1)
+    10000
+    """
+    from thermo.errors import InputError
+
+    try:
+        value = int(str(text).strip())
+    except ValueError:
+        raise InputError(option, f"must be a whole number of at least {least}", got=repr(text)) from None
+    if value < least:
+        raise InputError(option, f"must be a whole number of at least {least}", got=text)
+    return value
+
+
+class ProgressBar:
+    """A one-line progress bar on a terminal stream (nothing at all when it is not a terminal)."""
+
+    def __init__(self, stream=None, width: int = 30) -> None:
+        self.stream = sys.stderr if stream is None else stream
+        self.width = width
+        self.active = bool(getattr(self.stream, "isatty", lambda: False)())
+        self.last = -1
+
+    def __call__(self, done: int, total: int) -> None:
+        if not self.active or total <= 0:
+            return
+        filled = int(self.width * done / total)
+        if filled == self.last and done < total:
+            return
+        self.last = filled
+        self.stream.write(f"\r{NAME} [{'#' * filled}{'.' * (self.width - filled)}] {100 * done // total:3d}%")
+        self.stream.flush()
+
+    def close(self) -> None:
+        """Clear the bar's line."""
+        if self.active:
+            self.stream.write("\r" + " " * (self.width + len(NAME) + 10) + "\r")
+            self.stream.flush()
+
+
+def run(args: argparse.Namespace) -> dict:
+    """The Monte Carlo result as its JSON record."""
+    from sources.uncertainty import uncertainty, uncertainty_record
+    from tui.commands.sensitivity import whatif_inputs
+
+    samples = whole(args.samples, "--samples", 1)
+    seed = None if args.seed is None else whole(args.seed, "--seed", 0)
+    scenario, spreads, routes = whatif_inputs(args)
+    bar = ProgressBar()
+    try:
+        result = uncertainty(scenario, spreads, samples, seed, routes, progress=bar)
+    finally:
+        bar.close()
+    args._result = result
+    return uncertainty_record(result)
+
+
+def render(answer: dict, args: argparse.Namespace) -> str:
+    """A table of the percentiles with a text box chart (P10 .. P90 box, P50 mark) per route."""
+    from thermo.cautions import LOCAL_CODES
+
+    cur = answer["currency"]
+    rows = [r for r in answer["routes"] if r["cost_per_kg_p50"] is not None]
+    lines = [f"{answer['scenario']}: cost per kg CO2 in {cur}, {answer['samples']} samples, seed {answer['seed']}",
+             "inputs drawn: " + (", ".join(f"{i['name']} ({i['dist']})" for i in answer["inputs"]) or "none"), ""]
+    lo = min((r["cost_per_kg_p10"] for r in rows), default=0.0)
+    hi = max((r["cost_per_kg_p90"] for r in rows), default=1.0)
+    span = (hi - lo) or 1.0
+    width = 30
+    idw = max((len(r["id"]) for r in answer["routes"]), default=5)
+    lines.append(f"{'route':<{idw}}  {'nominal':>8} {'P10':>8} {'P50':>8} {'P90':>8} {'cheapest':>8}  "
+                 f"{lo:<.2f}{'':^{width - 8}}{hi:>.2f}")
+    for r in answer["routes"]:
+        if r["cost_per_kg_p50"] is None:
+            lines.append(f"{r['id']:<{idw}}  cost unknown (a price is missing)")
+            continue
+        chart = [" "] * (width + 1)
+        a, m, b = (round((r[k] - lo) / span * width) for k in ("cost_per_kg_p10", "cost_per_kg_p50", "cost_per_kg_p90"))
+        for k in range(a, b + 1):
+            chart[k] = "="
+        chart[a], chart[b], chart[m] = "[", "]", "|"
+        lines.append(f"{r['id']:<{idw}}  {r['cost_per_kg_nominal']:>8.3f} {r['cost_per_kg_p10']:>8.3f} "
+                     f"{r['cost_per_kg_p50']:>8.3f} {r['cost_per_kg_p90']:>8.3f} {r['probability_cheapest']:>8.1%}  "
+                     f"{''.join(chart)}")
+    lines += ["", "box: [ P10, | median, ] P90"]
+    lines += [f"WARNING: {w}" for w in answer["warnings"]]
+    lines += [f"note: {f}" for f in answer["failures"]]
+    lines += [f"caution: {c}" for c in answer["cautions"]] + [f"caution: {LOCAL_CODES}"]
+    return "\n".join(lines)
