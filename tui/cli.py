@@ -17,6 +17,8 @@ from thermo.errors import InputError
 #: The verbs, in the order ``--help`` lists them; each is ``tui.commands.<module>``.
 COMMANDS: tuple[str, ...] = (
     "compare",
+    "sensitivity",
+    "uncertainty",
     "batch",
     "routes",
     "demo",
