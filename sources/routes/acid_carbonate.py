@@ -184,9 +184,9 @@ def plan(request: RouteRequest) -> Batch:
     # final amounts fixed: heat and liquor mass from exactly these (the balances close exactly)
     heat_j = h_rx + dissolved_mol * h_dissolve + vapour_mol * h_evaporate
     liquor_kg = liquid_in_kg - (nu_co2 - dissolved_mol) * mw["CO2(g)"] - vapour_mol * m_h2o
-    if t_liq != t_h:
-        warnings.append(f"The liquor ends near {t_liq - 273.15:.0f} degC, outside the 0-60 degC range of "
-                        "the Henry's-law data; the CO2 it keeps is estimated at the range's edge.")
+    if t_liq > t_h:
+        warnings.append(f"The liquor ends near {t_liq - 273.15:.0f} degC, above the 0-60 degC range of "
+                        "the Henry's-law data; the CO2 it keeps is estimated at 60 degC.")
     delivered_mol = nu_co2 - dissolved_mol
     scale = request.co2_kg / (delivered_mol * mw["CO2(g)"])
 
@@ -271,7 +271,7 @@ def compute(request: RouteRequest) -> RouteResult:
     if batch.liquor_temperature_k < request.site.temperature_k - 10.0:
         warnings.append(f"The liquor cools to about {batch.liquor_temperature_k - 273.15:.0f} degC "
                         "(adiabatic): the room warms it back, but a cold batch reacts more slowly and "
-                        "keeps more CO2 dissolved.")
+                        "keeps more CO2 dissolved (below 0 degC estimated with Henry's law at 0 degC).")
     if batch.liquor_temperature_k > 333.15:
         warnings.append(f"The liquor warms to about {batch.liquor_temperature_k - 273.15:.0f} degC "
                         "(adiabatic): add water or add the acid more slowly.")
