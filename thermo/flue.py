@@ -273,13 +273,13 @@ def burn(fuel: str, excess_air: float, temperature_k: float = 293.15,
     h_feed = h_feed_gas - h_fuel_gas + _fuel_enthalpy(fuel, temperature_k)
 
     gas.HP = h_feed / mass, pressure_pa
-    gas.equilibrate("HP")
+    gas.equilibrate("HP", rtol=1e-12)
     flame_t = float(gas.T)
     x = dict(zip(gas.species_names, gas.X))
     flame_co, flame_no = 1e6 * float(x["CO"]), 1e6 * float(x["NO"])
 
     gas.TP = temperature_k, pressure_pa
-    gas.equilibrate("TP")
+    gas.equilibrate("TP", rtol=1e-12)
     exhaust = _moles(gas, mass)
     h_exhaust_gas = float(gas.enthalpy_mole) / 1000.0 * sum(exhaust.values())
 
