@@ -112,7 +112,8 @@ class Target:
         if self.is_price:
             return "per kg, m3 or J"
         short = {"fraction": "1", "temperature": "K", "mass": "kg", "pressure": "Pa", "time": "s",
-                 "volume": "m3", "energy": "J", "length": "m", "mass_flow": "kg/s", "volume_flow": "m3/s"}
+                 "volume": "m3", "energy": "J", "length": "m", "mass_flow": "kg/s", "volume_flow": "m3/s",
+                 "density": "kg/m3", "area": "m2", "velocity": "m/s", "power": "W"}
         return short.get(self.dimension, DIMENSIONS[self.dimension][0])
 
 
@@ -136,8 +137,8 @@ def targets(route: Route, scenario: Scenario, result: RouteResult | None = None)
                 out[f"prices.{key}"] = Target(f"prices.{key}", "price", price.amount, 0.0, math.inf, "relative")
     values = parse_options(route, scenario.options.get(route.id, {}))
     for opt in route.options:
-        if opt.dimension in ("choice", "count"):
-            continue
+        if opt.dimension in ("choice", "count") or not isinstance(values[opt.key], (int, float)):
+            continue  # a choice, a count, or a value that follows another input (e.g. "site")
         lowest = -math.inf if opt.low is None else opt.low
         highest = math.inf if opt.high is None else opt.high
         if opt.dimension == "fraction":

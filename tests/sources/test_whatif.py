@@ -63,18 +63,18 @@ def test_sensitivity_swings_and_order():
     assert effects == sorted(effects, reverse=True)
     assert "options.fake.vessel" not in names  # a choice cannot swing
     sugar = s.prices.get("sucrose").amount
-    kwh = s.prices.get("electricity").amount * KWH
-    disposal = s.prices.get("disposal").amount
     eff = next(i for i in result.inputs if i.name == "options.fake.efficiency")
     assert (eff.low, eff.high) == pytest.approx((0.85, 0.95), abs=1e-15)  # default +/- 5 points
+    # only the feed line depends on efficiency: 2/eff kg per kg (the dryer, if any, does not)
     for e, c in ((0.85, eff.cost_per_kg_low), (0.95, eff.cost_per_kg_high)):
-        assert c == pytest.approx(2 / e * sugar + 0.1 * kwh + 0.5 * disposal / 3.0, rel=1e-12)
+        assert c - result.cost_per_kg == pytest.approx(2 * sugar * (1 / e - 1 / 0.9), rel=1e-9)
     price = next(i for i in result.inputs if i.name == "prices.sucrose")
     assert price.cost_per_kg_high - price.cost_per_kg_low == pytest.approx(0.5 * sugar * 2 / 0.9, rel=1e-12)
     demand = next(i for i in result.inputs if i.name == "demand")
     assert (demand.low, demand.high) == (1.5, 6.0)  # x0.5 / x2
-    assert demand.cost_per_kg_low - demand.cost_per_kg_high == pytest.approx(
-        0.5 * disposal / 1.5 - 0.5 * disposal / 6.0, rel=1e-9)
+    for x, c in ((1.5, demand.cost_per_kg_low), (6.0, demand.cost_per_kg_high)):
+        assert c == evaluate(route, dataclasses.replace(s, co2_kg=x)).cost_per_kg  # a full re-evaluation
+    assert demand.cost_per_kg_low > demand.cost_per_kg_high  # the fixed 0.5 kg disposal spreads thinner
     temp = next(i for i in result.inputs if i.name == "options.fake.temperature")
     assert temp.high - temp.low == pytest.approx(10.0)  # +/- 5 K
     record = sensitivity_record(sensitivity(s, routes=[route]))
@@ -152,8 +152,8 @@ def test_non_price_input_by_interpolation():
     route, n = FakeRoute(), 20000
     s = scenario({"options.fake.efficiency": {"dist": "uniform", "low": "80 %", "high": "98 %"}})
     result = uncertainty(s, parse_uncertain(s, routes=[route]), n, seed=2, routes=[route]).routes[0]
-    sugar, kwh = s.prices.get("sucrose").amount, s.prices.get("electricity").amount * KWH
-    fixed = 0.1 * kwh + 0.5 * s.prices.get("disposal").amount / 3.0
+    sugar = s.prices.get("sucrose").amount
+    fixed = evaluate(route, s).cost_per_kg - 2 * sugar / 0.9  # every line but the feed (nominal eff 90 %)
     mean = 2 * sugar * math.log(0.98 / 0.80) / 0.18 + fixed
     second = 4 * sugar ** 2 * (1 / 0.80 - 1 / 0.98) / 0.18
     sd = math.sqrt(second - (mean - fixed) ** 2)
@@ -164,8 +164,11 @@ def test_non_price_input_by_interpolation():
 
 def test_default_spreads_when_no_table():
     route = FakeRoute()
-    result = uncertainty(scenario(), None, 200, seed=1, routes=[route])
-    assert {d.name for d in result.inputs} == {"prices.sucrose", "prices.electricity", "prices.disposal"}
+    s = scenario()
+    result = uncertainty(s, None, 200, seed=1, routes=[route])
+    assert {d.name for d in result.inputs} >= {"prices.sucrose", "prices.electricity", "prices.disposal"}
+    assert all(d.kind == "uniform" and d.low == pytest.approx(0.75 * s.prices.get(d.name[7:]).amount)
+               for d in result.inputs)
     assert any("no [uncertain] table" in w for w in result.warnings)
 
 
