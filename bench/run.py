@@ -150,7 +150,7 @@ def bench_cold_start(repeats: int, other: str | None = None) -> dict:
     return out
 
 
-def bench_recompute(repeats: int) -> dict:
+def bench_recompute(repeats: int, which: str = "polytunnel") -> dict:
     """Median time of validate + rank every route after one edit of the document (warm)."""
     import copy
 
@@ -158,18 +158,20 @@ def bench_recompute(repeats: int) -> dict:
     from sources.scenario import demo
     from tui.compute import outcome
 
-    document = copy.deepcopy(dict(demo().document))
+    document = copy.deepcopy(dict(demo(which).document))
     start = time.perf_counter()
     first = outcome(document, "bench")
     cold = time.perf_counter() - start
     times = []
     for i in range(repeats):
-        document["demand"] = f"{1.2 + 0.001 * (i + 1):.4f} kg/day"
+        document["demand"] = (f"{1.2 + 0.001 * (i + 1):.4f} kg/day" if which == "polytunnel"
+                              else f"{3.0 + 0.001 * (i + 1):.4f} kg")
         start = time.perf_counter()
         outcome(document, "bench")
         times.append(time.perf_counter() - start)
     times.sort()
-    return {"routes": [r.result.route_id for r in first.comparison.rows], "failures": list(first.comparison.failures),
+    return {"demo": which, "end_product": document.get("end_product", "gas"),
+            "routes": [r.result.route_id for r in first.comparison.rows], "failures": list(first.comparison.failures),
             "catalogue_failures": list(catalogue().failures),
             "first_call_s": cold, "median_ms": 1000 * statistics.median(times),
             "p90_ms": 1000 * times[int(0.9 * (len(times) - 1))], "repeats": repeats}
@@ -276,6 +278,7 @@ def _vapour_pressure_alternatives() -> dict:
 def report(results: dict) -> str:
     """docs/benchmarks.md."""
     m, c, r, mc, imp = (results[k] for k in ("machine", "cold_start", "recompute", "monte_carlo", "imports"))
+    r["demo_note"] = r.get("demo")
 
     def verdict(value: float, target: float) -> str:
         return "meets" if value <= target else "**misses**"
@@ -292,8 +295,11 @@ def report(results: dict) -> str:
         "| measure | figure | target | |", "|---|---|---|---|",
         f"| cold start to the first ranked frame | {c['app_first_ranked_frame_s']:.2f} s | <= 1.5 s | "
         f"{verdict(c['app_first_ranked_frame_s'], TARGETS['cold_start_s'])} |",
-        f"| recompute after one edit, median (p90) | {r['median_ms']:.1f} ms ({r['p90_ms']:.1f} ms) | <= 50 ms | "
+        f"| recompute after one edit, gas demo, median (p90) | {r['median_ms']:.1f} ms ({r['p90_ms']:.1f} ms) | <= 50 ms | "
         f"{verdict(r['median_ms'], TARGETS['recompute_ms'])} |",
+        f"| the same, dry-ice demo (dryer and delivery in the chain) | {results['recompute_dry_ice']['median_ms']:.1f} ms "
+        f"({results['recompute_dry_ice']['p90_ms']:.1f} ms) | <= 50 ms | "
+        f"{verdict(results['recompute_dry_ice']['median_ms'], TARGETS['recompute_ms'])} |",
         f"| Monte Carlo, {mc['samples']:,} samples of every route, compute | {mc['compute_s']:.3f} s | <= 1 s | "
         f"{verdict(mc['compute_s'], TARGETS['mc_compute_s'])} |",
         f"| the whole `co2routes uncertainty --samples {mc['samples']}` command | {mc['command_s']:.2f} s | <= 4 s | "
@@ -314,8 +320,11 @@ def report(results: dict) -> str:
         f"Routes ranked: {', '.join(r['routes'])} ({len(r['routes'])}). First call in a fresh process "
         f"(imports pint, Cantera, CoolProp): {r['first_call_s']:.2f} s. Then {r['repeats']} edits: median "
         f"{r['median_ms']:.2f} ms, p90 {r['p90_ms']:.2f} ms.",
-        "Note: `sources.compare.compare` does not yet add the dryer and delivery to each route; when it "
-        "does, this figure will include them (the bench calls the interface's own recompute).", "",
+        f"The same for the dry-ice demo ({results['recompute_dry_ice']['demo']}, end product "
+        f"{results['recompute_dry_ice']['end_product']}, so delivery is in the chain too): median "
+        f"{results['recompute_dry_ice']['median_ms']:.2f} ms, p90 {results['recompute_dry_ice']['p90_ms']:.2f} ms.",
+        "The bench calls the interface's own recompute (`tui.compute.outcome`: validate, then "
+        "`sources.compare.compare`, which adds each route's gas conditioning as it is written today).", "",
         "## Monte Carlo", "",
         f"{mc['samples']:,} samples x {mc['routes']} routes, {mc['inputs']} uncertain inputs of which "
         f"{mc['non_price_inputs']} are not prices (each evaluated at 9 grid nodes per route it touches).", "",
@@ -360,6 +369,7 @@ def main(argv: list[str] | None = None) -> int:
     results = {"machine": machine()}
     results["cold_start"] = bench_cold_start(args.repeats, args.other_coolprop)
     results["recompute"] = bench_recompute(200)
+    results["recompute_dry_ice"] = bench_recompute(100, "science-fair")
     results["monte_carlo"] = bench_monte_carlo(max(3, args.repeats // 2))
     results["imports"] = bench_imports(args.repeats, args.other_coolprop)
     conclusions = ROOT / "bench" / "conclusions.md"

@@ -159,7 +159,7 @@ def uncertainty(scenario: Scenario, distributions: Mapping[str, Distribution] | 
                 for g, x in enumerate(nodes):
                     result = evaluate_at(route, scenario, {**route_fixed, name: float(x)})
                     at = cost_model(result, book)
-                    table[:, g] = _line_basis(at, model, prices, book) * (model.co2_kg / at.co2_kg)
+                    table[:, g] = _line_basis(at, model, prices, book) * (model.basis_kg / at.basis_kg)
                     step()
                 curves.append((name, nodes, table))
         except InputError:
@@ -241,7 +241,7 @@ def _route_costs(model, curves, drawn, prices, book) -> np.ndarray:
             line = line * (sampled / nominal if nominal > 0.0 else sampled)
         total = total + line
     size = len(next(iter(drawn.values()))) if drawn else 1
-    return np.broadcast_to(np.asarray(total / model.co2_kg, dtype=float), (size,)).copy()
+    return np.broadcast_to(np.asarray(total / model.basis_kg, dtype=float), (size,)).copy()
 
 
 def uncertainty_record(result: Uncertainty) -> dict[str, Any]:

@@ -25,7 +25,7 @@ entry per input, every quantity a string with units as elsewhere in the scenario
 deviation of a temperature is a temperature difference (``"3 K"``, ``"3 delta_degC"``).
 
 **Cost lines.** A route's cost is ``sum(line.cost)`` over ``RouteResult.costs`` divided by
-``co2_kg``; every line is its price's amount times a coefficient that does not depend on the
+the kg it is per (the end product, or the CO2 delivered); every line is its price's amount times a coefficient that does not depend on the
 price (a mass, a volume or an energy), so cost is exactly linear in each price.
 """
 
@@ -213,11 +213,12 @@ class CostModel:
 
     ``costs`` are the nominal line costs (``None`` when unknown), ``keys`` each line's price key
     (``None``: fixed), ``per_unit`` each line's cost per unit of its price amount (the line cost
-    with that price set to 1 per SI unit) [kg, m3 or J]; ``co2_kg`` the CO2 delivered [kg].
+    with that price set to 1 per SI unit) [kg, m3 or J]; ``basis_kg`` what cost per kg divides by:
+    the end product when the result names it (``RouteResult.per_kg_basis``), else the CO2 [kg].
     """
 
     route_id: str
-    co2_kg: float
+    basis_kg: float
     items: tuple[str, ...]
     keys: tuple[str | None, ...]
     costs: tuple[float | None, ...]
@@ -238,7 +239,7 @@ class CostModel:
                 nominal = book.get(key).amount
                 cost = cost * (prices[key] / nominal) if nominal > 0 else unit_cost * prices[key]
             total += cost
-        return total / self.co2_kg
+        return total / self.basis_kg
 
 
 def cost_model(result: RouteResult, book: PriceBook) -> CostModel:
@@ -255,7 +256,8 @@ def cost_model(result: RouteResult, book: PriceBook) -> CostModel:
         one = (reagent_cost(result.reagents[i], unit_book) if i < n_reagents
                else use_cost(result.uses[i - n_reagents], unit_book))
         per_unit.append(one.cost)
-    return CostModel(result.route_id, result.co2_kg, tuple(line.item for line in result.costs), keys,
+    basis = getattr(result, "per_kg_basis", result.co2_kg)
+    return CostModel(result.route_id, basis, tuple(line.item for line in result.costs), keys,
                      tuple(line.cost for line in result.costs), tuple(per_unit))
 
 

@@ -138,7 +138,7 @@ def test_monte_carlo_mean_of_a_linear_cost_within_sampling_error():
         model = cost_model(evaluate(route, s), s.prices)
         mean = var = 0.0
         for key, cost, unit in zip(model.keys, model.costs, model.per_unit):
-            a = unit / model.co2_kg
+            a = unit / model.basis_kg
             d = dists.get(f"prices.{key}")
             mean += a * (d.analytic_mean() if d else s.prices.get(key).amount)
             var += a * a * (d.analytic_variance() if d else 0.0)
@@ -196,3 +196,15 @@ def test_bad_names_and_units():
         parse_uncertain(scenario({"colour": {"dist": "uniform", "low": "1 %", "high": "2 %"}}))
     with pytest.raises(InputError, match="samples"):
         uncertainty(scenario(), None, 0, routes=[FakeRoute()])
+
+
+def test_zero_width_equals_nominal_for_dry_ice():
+    """Cost per kg of end product (dry ice): the Monte Carlo divides by the same basis as compare."""
+    from sources.scenario import validate
+
+    route = FakeRoute()
+    s = validate({"name": "dry ice", "demand": "3 kg", "end_product": "dry-ice", "uncertain": {
+        "prices.sucrose": {"dist": "uniform", "low": "1 / kg", "high": "1 / kg"}}}, "test")
+    nominal = compare(s, [route]).rows[0].cost_per_kg
+    r = uncertainty(s, parse_uncertain(s, routes=[route]), 50, seed=1, routes=[route]).routes[0]
+    assert r.cost_per_kg_p10 == r.cost_per_kg_p90 == nominal
