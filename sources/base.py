@@ -191,16 +191,28 @@ class RouteResult:
     #: what the route hands over: ``"raw-gas"`` (to be dried, and compressed if the end product
     #: asks), or ``"gas"``, ``"liquid"``, ``"dry-ice"`` when it is bought already in that form.
     delivers: str = "raw-gas"
+    #: kg of end product (gas, liquid or dry ice) the batch yields after drying and delivery;
+    #: ``None`` means the CO2 delivered (``co2_kg``) is the product. Per-kg figures use it.
+    product_kg: float | None = None
+    #: the dryer sized for this route's raw gas (a :class:`thermo.dryer.DryerResult`), if any
+    dryer: Any = None
+    #: compression / flash to the end product (a :class:`sources.delivery.Delivery`), if any
+    delivery: Any = None
+
+    @property
+    def per_kg_basis(self) -> float:
+        """The mass per-kg figures divide by [kg]: the end product, else the CO2 delivered."""
+        return self.co2_kg if self.product_kg is None else self.product_kg
 
     @property
     def energy_kwh_per_kg(self) -> float:
-        """All energy used per kg of CO2 delivered [kWh/kg]."""
-        return self.energy.total_kwh / self.co2_kg
+        """All energy used per kg of end product [kWh/kg]."""
+        return self.energy.total_kwh / self.per_kg_basis
 
     @property
     def reagent_kg_per_kg(self) -> float:
-        """Mass of everything bought per kg of CO2 delivered [kg/kg]."""
-        return sum(r.mass_kg for r in self.reagents) / self.co2_kg
+        """Mass of everything bought per kg of end product [kg/kg]."""
+        return sum(r.mass_kg for r in self.reagents) / self.per_kg_basis
 
     @property
     def total_cost(self) -> float | None:
@@ -211,9 +223,9 @@ class RouteResult:
 
     @property
     def cost_per_kg(self) -> float | None:
-        """Cost per kg of CO2 delivered, ``None`` if any price is unknown."""
+        """Cost per kg of end product, ``None`` if any price is unknown."""
         total = self.total_cost
-        return None if total is None else total / self.co2_kg
+        return None if total is None else total / self.per_kg_basis
 
 
 @runtime_checkable

@@ -15,7 +15,7 @@ import dataclasses
 from dataclasses import dataclass
 from typing import Any, Callable, Mapping, Sequence
 
-from sources.base import Route, RouteRequest, RouteResult, parse_options
+from sources.base import Route, RouteRequest, RouteResult, Use, parse_options
 from sources.prices import cost_lines
 from sources.registry import catalogue
 from sources.scenario import CRITERIA, Scenario
@@ -25,7 +25,7 @@ _CRITERION: dict[str, tuple[Callable[["RouteRow"], float | None], bool]] = {
     "cost": (lambda r: r.cost_per_kg, False),
     "energy": (lambda r: r.result.energy_kwh_per_kg, False),
     "time": (lambda r: r.result.time_h, False),
-    "heat": (lambda r: abs(r.result.heat_kj) / r.result.co2_kg, False),
+    "heat": (lambda r: abs(r.result.heat_kj) / r.result.per_kg_basis, False),
     "water": (lambda r: r.result.water_g_per_kg_co2, False),
     "purity": (lambda r: r.result.raw_gas.co2_mole_fraction, True),
     "hazard": (lambda r: float(r.result.hazard), False),
@@ -60,17 +60,53 @@ class Comparison:
 
 def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
              options: Mapping[str, str] | None = None) -> RouteResult:
-    """One route's batch for ``scenario``, priced. ``options`` override the scenario's."""
+    """One route's batch for ``scenario``: made, dried, delivered as the end product, priced.
+
+    ``co2_kg`` is the end product wanted (default the scenario's demand); ``options`` override
+    the scenario's options for this route. For dry ice the route is asked for the raw CO2 the
+    flash needs (:func:`sources.delivery.raw_co2_needed`). The batch's time is the longer of the
+    route's and the compressor's (the compressor draws from a buffer while the gas comes).
+    """
+    from sources.conditioning import condition
+    from sources.delivery import plan_delivery, raw_co2_needed
+
     given = dict(scenario.options.get(route.id, {}))
     given.update(options or {})
-    request = RouteRequest(
-        co2_kg=scenario.co2_kg if co2_kg is None else co2_kg,
-        site=scenario.site,
-        options=parse_options(route, given),
-        end_product=scenario.end_product,
+    parsed = parse_options(route, given)
+    product_kg = scenario.co2_kg if co2_kg is None else co2_kg
+
+    def run(kg: float) -> RouteResult:
+        return route.compute(RouteRequest(co2_kg=kg, site=scenario.site, options=parsed,
+                                          end_product=scenario.end_product))
+
+    result = run(product_kg)
+    raw_kg, flash = raw_co2_needed(product_kg, scenario.end_product, result.delivers,
+                                   scenario.delivery, scenario.site)
+    if raw_kg != product_kg:
+        result = run(raw_kg)
+    dried = condition(result, scenario.dryer, scenario.site)
+    delivery = plan_delivery(product_kg, result.co2_kg, flash, scenario.end_product,
+                             result.delivers, scenario.delivery, scenario.site)
+    uses = result.uses + dried.uses
+    if delivery.electricity_kwh > 0:
+        uses += (Use("compression (electric motor)", delivery.electricity_kwh, "energy_kwh", "electricity"),)
+    energy = dataclasses.replace(
+        result.energy,
+        electricity_kwh=result.energy.electricity_kwh + dried.electricity_kwh + delivery.electricity_kwh)
+    merged = dataclasses.replace(
+        result, uses=uses, energy=energy, product_kg=product_kg, dryer=dried.dryer,
+        delivery=delivery if scenario.end_product != "gas" else None,
+        time_h=max(result.time_h, delivery.time_h),
+        warnings=_unique(result.warnings + dried.warnings + delivery.warnings),
+        cautions=_unique(result.cautions + dried.cautions + delivery.cautions),
+        notes=_unique(result.notes + delivery.notes),
     )
-    result = route.compute(request)
-    return dataclasses.replace(result, costs=cost_lines(result.reagents, result.uses, scenario.prices))
+    return dataclasses.replace(merged, costs=cost_lines(merged.reagents, merged.uses, scenario.prices))
+
+
+def _unique(items: Sequence[str]) -> tuple[str, ...]:
+    """``items`` without repeats, first occurrence kept."""
+    return tuple(dict.fromkeys(items))
 
 
 def rank(results: Sequence[RouteResult], weights: Mapping[str, float]) -> tuple[RouteRow, ...]:

@@ -35,6 +35,7 @@ class Delivery:
     time_h: float
     warnings: tuple[str, ...]
     cautions: tuple[str, ...]
+    notes: tuple[str, ...] = ()
 
     @property
     def raw_per_product(self) -> float:
@@ -51,12 +52,13 @@ def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, sit
     """
     if end_product != "dry-ice" or delivers == "dry-ice":
         return product_kg, None
-    from thermo.flash import flash_at_temperature
+    from thermo.dryice import draw_yield, raw_per_dry_ice
 
-    # bought gas comes as a liquid cylinder at the site's temperature; made gas is condensed
+    # bought gas comes as a liquid cylinder at the site's temperature; made gas is condensed at
+    # the condensing temperature; either way the liquid is drawn from the bottom (dip tube)
     temperature = site.temperature_k if delivers in ("gas", "liquid") else plan.condensing_temperature_k
-    flash = flash_at_temperature(min(temperature, 303.0))
-    return product_kg / flash.solid_fraction, flash
+    flash = draw_yield(min(temperature, 303.0), draw="liquid")
+    return product_kg * raw_per_dry_ice(flash.solid_fraction).kg_raw_per_kg, flash
 
 
 def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_product: str,
@@ -76,7 +78,8 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
             site.pressure_pa, site.temperature_k, plan.condensing_temperature_k,
             stages=plan.stages, efficiency=plan.efficiency,
             intercool_temperature_k=plan.intercool_temperature_k,
-            displacement_m3_s=plan.displacement_m3_s, mass_kg=raw_co2_kg,
+            displacement_m3_s=plan.displacement_m3_s,
+            volumetric_efficiency=plan.volumetric_efficiency, mass_kg=raw_co2_kg,
         )
         electricity = liquefaction.work_j_per_kg * raw_co2_kg / MOTOR_EFFICIENCY / 3.6e6
         if liquefaction.batch_time_s is not None:
@@ -90,4 +93,4 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
     if end_product == "dry-ice":
         caution_list += [cautions.COLD_LIQUID, cautions.DRY_ICE]
     return Delivery(end_product, product_kg, raw_co2_kg, liquefaction, flash, electricity, time_h,
-                    tuple(warnings + notes), tuple(caution_list))
+                    tuple(warnings), tuple(caution_list), tuple(notes))

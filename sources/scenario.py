@@ -15,7 +15,8 @@ Schema (every quantity a string with units)::
     currency = "EUR"              # optional; must match the price book
     [site]      temperature, pressure, air_co2
     [dryer]     desiccant, target_dew_point | target_ppmv, cycle
-    [delivery]  condensing_temperature, stages, efficiency, displacement
+    [delivery]  condensing_temperature, stages, efficiency, volumetric_efficiency,
+                displacement, intercool_temperature
     [weights]   cost, energy, time, heat, water, purity, hazard (numbers >= 0)
     [options.ROUTE-ID]  KEY = "VALUE" for that route's options
     [prices]    KEY = "AMOUNT / UNIT" overriding the price book
@@ -49,7 +50,7 @@ _SECTION_KEYS = {
     "site": {"temperature", "pressure", "air_co2"},
     "dryer": {"desiccant", "target_dew_point", "target_ppmv", "cycle"},
     "delivery": {"condensing_temperature", "stages", "efficiency", "displacement",
-                 "intercool_temperature"},
+                 "intercool_temperature", "volumetric_efficiency"},
 }
 
 
@@ -73,6 +74,7 @@ class DeliveryPlan:
     efficiency: float = 0.65
     displacement_m3_s: float | None = None
     intercool_temperature_k: float | None = None
+    volumetric_efficiency: float = 0.80
 
 
 @dataclass(frozen=True, slots=True)
@@ -186,14 +188,17 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
     if isinstance(stages_raw, bool) or not isinstance(stages_raw, int) or not 1 <= stages_raw <= 6:
         raise InputError(where("delivery", "stages"), "must be a whole number from 1 to 6", got=stages_raw)
     efficiency = q("delivery", "efficiency", "fraction", "65 %", positive=True)
-    if efficiency > 1.0:
-        raise InputError(where("delivery", "efficiency"), "must be in (0, 100 %]", got=delivery_section.get("efficiency"))
+    volumetric = q("delivery", "volumetric_efficiency", "fraction", "80 %", positive=True)
+    for key, value in (("efficiency", efficiency), ("volumetric_efficiency", volumetric)):
+        if value > 1.0:
+            raise InputError(where("delivery", key), "must be in (0, 100 %]", got=delivery_section.get(key))
     delivery = DeliveryPlan(
         condensing_temperature_k=q("delivery", "condensing_temperature", "temperature", "0 degC", positive=True),
         stages=stages_raw,
         efficiency=efficiency,
         displacement_m3_s=q("delivery", "displacement", "volume_flow", positive=True),
         intercool_temperature_k=q("delivery", "intercool_temperature", "temperature", positive=True),
+        volumetric_efficiency=volumetric,
     )
     weights = dict(DEFAULT_WEIGHTS)
     for key, value in sections["weights"].items():

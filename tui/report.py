@@ -47,6 +47,19 @@ def _rows(record: Mapping[str, Any]) -> list[list[str]]:
     return [[cell(k, f, route[k]) for k, _, f in COLUMNS] for route in record["routes"]]
 
 
+def grouped_warnings(record: Mapping[str, Any]) -> dict[str, list[str]]:
+    """Each distinct warning with the routes that carry it, in ranking order.
+
+    >>> grouped_warnings({"routes": [{"id": "a", "warnings": ["w"]}, {"id": "b", "warnings": ["w", "v"]}]})
+    {'w': ['a', 'b'], 'v': ['b']}
+    """
+    groups: dict[str, list[str]] = {}
+    for route in record["routes"]:
+        for text in route["warnings"]:
+            groups.setdefault(text, []).append(route["id"])
+    return groups
+
+
 def comparison_table(comparison: Comparison) -> str:
     """A plain-text table of the ranking, with each route's cautions after it."""
     record = comparison_record(comparison)
@@ -61,9 +74,8 @@ def comparison_table(comparison: Comparison) -> str:
     lines.append("")
     lines.append("weights: " + ", ".join(f"{k}={v:g}" for k, v in record["weights"].items()))
     lines.append("hazard: 1 low, 2 moderate, 3 high; heat: + takes heat in, - gives heat off")
-    for route in record["routes"]:
-        for w in route["warnings"]:
-            lines.append(f"WARNING [{route['id']}]: {w}")
+    for text, ids in grouped_warnings(record).items():
+        lines.append(f"WARNING [{', '.join(ids)}]: {text}")
     seen: list[str] = []
     for route in record["routes"]:
         for c in route["cautions"]:
@@ -85,10 +97,10 @@ def comparison_markdown(comparison: Comparison) -> str:
     out += ["", "Weights: " + ", ".join(f"{k} {v:g}" for k, v in record["weights"].items()) + ".", ""]
     out.append("## Cautions")
     out.append("")
+    for text, ids in grouped_warnings(record).items():
+        out.append(f"- **{', '.join(ids)}**: {text}")
     seen: list[str] = []
     for route in record["routes"]:
-        for c in route["warnings"]:
-            out.append(f"- **{route['id']}**: {c}")
         for c in route["cautions"]:
             if c not in seen:
                 seen.append(c)
