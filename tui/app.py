@@ -41,9 +41,9 @@ class Co2RoutesApp(App[int]):
             except Exception as err:  # noqa: BLE001 - a bad file is a message, never a crash
                 self.open_error = f"could not open {self.path}: {err}; showing the invented demo"
                 opened = open_demo()
-        self.push_screen(MainScreen(opened, self.routes))
+        self.push_screen(MainScreen(opened, self.routes, notice=self.open_error))
         if self.open_error:
-            self.call_after_refresh(self.screen._say, self.open_error, True)
+            self.notify(self.open_error, title="not opened", severity="error", timeout=10)
 
     @property
     def planner(self) -> MainScreen:

@@ -46,8 +46,12 @@ class MainScreen(Filing, Screen):
         Binding("ctrl+g", "next_pane", "go to the next pane: inputs, ranking, detail"),
     ] + [Binding(str(i + 1), f"tab({i})", f"detail tab: {title}") for i, (_, title) in enumerate(TABS)]
 
-    def __init__(self, opened: Opened, routes: Sequence[Any] | None = None) -> None:
+    def __init__(self, opened: Opened, routes: Sequence[Any] | None = None,
+                 notice: str | None = None) -> None:
         super().__init__()
+        #: a message that stays in front of the status line until the first edit (a file that
+        #: could not be opened at start-up)
+        self.notice = notice
         self.opened = opened
         #: the document as edited now (it may hold a refused value)
         self.document: dict[str, Any] = dict(opened.document)
@@ -203,8 +207,11 @@ class MainScreen(Filing, Screen):
         self._title()
         note = f"; {len(comparison.failures)} route(s) left out: " + " | ".join(comparison.failures) \
             if comparison.failures else ""
-        self._say(f"{len(comparison.rows)} routes ranked in {outcome.seconds:.2f} s{note}",
-                  bool(comparison.failures))
+        ranked = f"{len(comparison.rows)} routes ranked in {outcome.seconds:.2f} s{note}"
+        if self.notice:
+            self._say(f"{self.notice} · {ranked}", True)
+        else:
+            self._say(ranked, bool(comparison.failures))
         self.redraw_charts(outcome, generation)
 
     def _charts(self, generation: int, sweep: Any, curve: Any) -> None:
@@ -269,6 +276,7 @@ class MainScreen(Filing, Screen):
             return
         self.document = new
         self.dirty = True
+        self.notice = None
         self._title()
         self.start(f)
 
