@@ -22,6 +22,7 @@ COMMANDS: tuple[str, ...] = (
     "batch",
     "routes",
     "demo",
+    "open",
     "saturation",
     "store",
     "snow",
