@@ -318,7 +318,7 @@ def size_dryer(inp: DryerInput) -> DryerResult:
                         "value for downflow beds): use a wider vessel.")
     if velocity < 0.05:
         warnings.append("The gas moves slower than the 0.05 m/s the MTZ correlation was made for; "
-                        "its zone length is an extrapolation (on the long, safe side).")
+                        "its zone length is an extrapolation (probably on the long, safe side).")
     drop = ergun_gradient(dp, eps, velocity, gas.density_kg_m3, gas.viscosity_pa_s) * length
     if drop > MAX_BED_DROP_PA:
         warnings.append(f"Bed pressure drop {drop / 1e3:.3g} kPa exceeds the 8 psi (55 kPa) design "
