@@ -12,6 +12,7 @@ Shaft work is turned into electricity with :data:`MOTOR_EFFICIENCY`.
 from __future__ import annotations
 
 from dataclasses import dataclass
+from functools import lru_cache
 from typing import Any
 
 from sources.base import Site
@@ -61,6 +62,19 @@ def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, sit
     return product_kg * raw_per_dry_ice(flash.solid_fraction).kg_raw_per_kg, flash
 
 
+@lru_cache(maxsize=64)
+def _liquefy(pressure_pa: float, temperature_k: float, plan):
+    """Compression per kg from the site's state under ``plan`` (the same for every route, so
+    computed once per scenario; the batch time is the mass over ``mass_flow_kg_s``)."""
+    from thermo.compression import liquefy
+
+    return liquefy(pressure_pa, temperature_k, plan.condensing_temperature_k,
+                   stages=plan.stages, efficiency=plan.efficiency,
+                   intercool_temperature_k=plan.intercool_temperature_k,
+                   displacement_m3_s=plan.displacement_m3_s,
+                   volumetric_efficiency=plan.volumetric_efficiency)
+
+
 def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_product: str,
                   delivers: str, plan, site: Site) -> Delivery:
     """Compression (when the route hands over raw gas and the product is liquid or dry ice),
@@ -72,18 +86,10 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
     time_h = 0.0
     if end_product in ("liquid", "dry-ice") and delivers in ("raw-gas", "gas") and not (
             delivers == "gas" and end_product == "dry-ice"):
-        from thermo.compression import liquefy
-
-        liquefaction = liquefy(
-            site.pressure_pa, site.temperature_k, plan.condensing_temperature_k,
-            stages=plan.stages, efficiency=plan.efficiency,
-            intercool_temperature_k=plan.intercool_temperature_k,
-            displacement_m3_s=plan.displacement_m3_s,
-            volumetric_efficiency=plan.volumetric_efficiency, mass_kg=raw_co2_kg,
-        )
+        liquefaction = _liquefy(site.pressure_pa, site.temperature_k, plan)
         electricity = liquefaction.work_j_per_kg * raw_co2_kg / MOTOR_EFFICIENCY / 3.6e6
-        if liquefaction.batch_time_s is not None:
-            time_h = liquefaction.batch_time_s / 3600.0
+        if liquefaction.mass_flow_kg_s:
+            time_h = raw_co2_kg / liquefaction.mass_flow_kg_s / 3600.0
         warnings.extend(liquefaction.warnings)
     if end_product == "dry-ice" and flash is not None:
         notes.append(f"{flash.solid_fraction:.0%} of the liquid becomes dry ice; the rest is vented as gas")

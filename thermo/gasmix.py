@@ -100,10 +100,16 @@ def gas_state(temperature_k: float, pressure_pa: float, composition: Mapping[str
         if name == "H2O":
             z_mix += y
             p_sat = cp.PropsSI("P", "T", t, "Q", 1, "Water") if t >= 273.16 else None
+            # dilute-gas viscosity hardly depends on pressure: evaluate the vapour at its partial
+            # pressure, kept inside CoolProp's range (above the triple-point pressure 611.655 Pa,
+            # below saturation); where no such pressure exists the trace of water is left out of
+            # the viscosity (it is under 0.6 % of the gas there)
             if p_sat is not None:
-                mus.append(cp.PropsSI("V", "T", t, "P", min(y * p, 0.99 * p_sat), "Water"))
-                fractions.append(y)
-                masses.append(m)
+                p_eval = min(max(y * p, 620.0), 0.99 * p_sat)
+                if p_eval > 611.66:
+                    mus.append(cp.PropsSI("V", "T", t, "P", p_eval, "Water"))
+                    fractions.append(y)
+                    masses.append(m)
             continue
         try:
             rho_i = cp.PropsSI("D", "T", t, "P", p, fluid)

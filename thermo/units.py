@@ -73,6 +73,24 @@ def registry():
 
 
 def parse(text: str | float | int, field: str, dimension: str) -> float:
+    """Parse ``text`` (cached: the interface re-parses the same strings after every edit).
+
+    See :func:`_parse` for the rules.
+
+    >>> parse("1 atm", "pressure", "pressure")
+    101325.0
+    """
+    if isinstance(text, (str, int, float)) and not isinstance(text, bool):
+        return _parse_cached(text, field, dimension)
+    return _parse(text, field, dimension)
+
+
+@lru_cache(maxsize=4096)
+def _parse_cached(text: str | float | int, field: str, dimension: str) -> float:
+    return _parse(text, field, dimension)
+
+
+def _parse(text: str | float | int, field: str, dimension: str) -> float:
     """Parse ``text`` (a number with units, e.g. ``"160 psi"``) and return the SI float.
 
     Parameters
