@@ -11,10 +11,10 @@ from __future__ import annotations
 import dataclasses
 import time
 from dataclasses import dataclass
-from typing import Any, Mapping, Sequence
+from typing import Any, Callable, Mapping, Sequence
 
 #: Multiples of the scenario's demand the cost-against-demand chart is drawn at.
-SWEEP_FACTORS = (0.25, 0.5, 1.0, 2.0, 4.0, 8.0)
+SWEEP_FACTORS = (0.25, 0.5, 1.0, 2.0, 4.0)
 
 
 @dataclass(frozen=True, slots=True)
@@ -50,24 +50,35 @@ class SaturationCurve:
 
 
 def outcome(document: Mapping[str, Any], source: str, text: str | None = None,
-            routes: Sequence[Any] | None = None) -> Outcome:
-    """Validate ``document`` and rank every route for it (raises ``InputError`` on bad input)."""
+            routes: Sequence[Any] | None = None,
+            proceed: Callable[[], bool] | None = None) -> Outcome | None:
+    """Validate ``document`` and rank every route for it (raises ``InputError`` on bad input).
+
+    ``proceed`` is asked after validation, which is quick, and before the ranking, which is not:
+    when it answers ``False`` (a newer edit has come in) nothing more is done and ``None`` is
+    returned.
+    """
     from sources.compare import compare
     from sources.scenario import validate
 
     start = time.perf_counter()
     scenario = validate(document, source, text)
+    if proceed is not None and not proceed():
+        return None
     comparison = compare(scenario, routes)
     return Outcome(scenario, comparison, time.perf_counter() - start)
 
 
 def demand_sweep(scenario: Any, routes: Sequence[Any] | None = None,
-                 factors: Sequence[float] = SWEEP_FACTORS) -> Sweep:
+                 factors: Sequence[float] = SWEEP_FACTORS, known: Any = None,
+                 proceed: Callable[[], bool] | None = None) -> Sweep | None:
     """Cost per kg of each route when the batch is ``factor`` times the scenario's.
 
     Each point is a full :func:`sources.compare.compare` of the scenario at that batch size, so
     the chart shows exactly what the ranking would at that demand. A batch size that a route
-    refuses gives ``None`` for that route at that point.
+    refuses gives ``None`` for that route at that point. ``known`` is the comparison at the
+    scenario's own size (factor 1), reused rather than worked out again; ``proceed`` is asked
+    before each point, and ``False`` stops the sweep (``None`` is returned).
     """
     from sources.compare import compare
     from thermo.errors import InputError
@@ -76,8 +87,11 @@ def demand_sweep(scenario: Any, routes: Sequence[Any] | None = None,
     costs: dict[str, list[float | None]] = {}
     labels: dict[str, str] = {}
     for i, size in enumerate(sizes):
+        if proceed is not None and not proceed():
+            return None
         try:
-            comparison = compare(dataclasses.replace(scenario, co2_kg=size), routes)
+            comparison = known if known is not None and factors[i] == 1.0 else \
+                compare(dataclasses.replace(scenario, co2_kg=size), routes)
         except InputError:
             comparison = None
         rows = {} if comparison is None else {row.result.route_id: row for row in comparison.rows}
@@ -114,29 +128,24 @@ def saturation_curve(scenario: Any, points: int = 40) -> SaturationCurve:
     return SaturationCurve(temps, pressures, tuple(marks), tuple(notes))
 
 
-def breakthrough_points(dryer: Any) -> tuple[tuple[float, ...], tuple[float, ...], str] | None:
-    """The breakthrough curve of a dryer result as ``(hours, outlet values, y label)``.
+def breakthrough_points(result: Any, scenario: Any, points: int = 41
+                        ) -> tuple[tuple[float, ...], tuple[float, ...], str] | None:
+    """The breakthrough curve of the dryer sized for ``result`` as ``(hours, outlet ppmv, label)``,
+    from :func:`thermo.dryer.breakthrough_curve`; ``None`` when the route needs no dryer.
 
-    Reads ``breakthrough_curve`` from the dryer result: either an object with ``times_h`` and one
-    of ``outlet_ppmv`` / ``outlet_fraction`` / ``ratio``, or a sequence of ``(hours, value)``
-    pairs. ``None`` when the result carries no curve.
+    The curve needs only the inlet state besides the sized bed: the bed takes the raw gas at the
+    site's temperature and the raw gas's pressure, as :func:`sources.conditioning.condition`
+    sizes it.
     """
-    curve = getattr(dryer, "breakthrough_curve", None) if dryer is not None else None
-    if curve is None:
+    from thermo.dryer import DryerInput, breakthrough_curve
+
+    bed = getattr(result, "dryer", None)
+    if bed is None:
         return None
-    times = getattr(curve, "times_h", None)
-    if times is not None:
-        for name, label in (("outlet_ppmv", "outlet water, ppmv"),
-                            ("outlet_fraction", "outlet / inlet water"),
-                            ("ratio", "outlet / inlet water")):
-            values = getattr(curve, name, None)
-            if values is not None:
-                return tuple(float(t) for t in times), tuple(float(v) for v in values), label
-        return None
-    try:
-        pairs = [(float(a), float(b)) for a, b in curve]
-    except (TypeError, ValueError):
-        return None
-    if not pairs:
-        return None
-    return tuple(p[0] for p in pairs), tuple(p[1] for p in pairs), "outlet / inlet water"
+    inp = DryerInput(co2_flow_kg_s=bed.co2_flow_kg_s, inlet_temperature_k=scenario.site.temperature_k,
+                     desiccant=bed.desiccant, cycle_s=scenario.dryer.cycle_s,
+                     inlet_pressure_pa=result.raw_gas.pressure_pa, inlet_water_ppmv=bed.inlet_water_ppmv,
+                     target_ppmv=bed.target_ppmv)
+    curve = breakthrough_curve(inp, bed, points)
+    return (tuple(p.time_s / 3600.0 for p in curve), tuple(p.outlet_ppmv for p in curve),
+            "outlet water, ppmv")

@@ -15,9 +15,10 @@ class LinearRoute:
     """Buys ``ratio`` kg of one priced feed per kg CO2 and a fixed amount of electricity per batch."""
 
     def __init__(self, rid: str, label: str, price_key: str, ratio: float, fixed_kwh: float,
-                 hazard: int, purity: float) -> None:
+                 hazard: int, purity: float, delivers: str = "raw-gas") -> None:
         self.id, self.label, self.price_key = rid, label, price_key
         self.ratio, self.fixed_kwh, self.hazard, self.purity = ratio, fixed_kwh, hazard, purity
+        self.delivers = delivers
         self.options = (Option("grade", "grade", "choice", "plain", choices=("plain", "fine")),)
 
     def compute(self, request: RouteRequest) -> RouteResult:
@@ -31,13 +32,15 @@ class LinearRoute:
             heat_kj=-10.0 * request.co2_kg, temperature_change_k=None, water_g_per_kg_co2=water * 409.0,
             energy=Energy(electricity_kwh=self.fixed_kwh), time_h=2.0 + self.hazard,
             hazard=self.hazard, hazard_reason="test double", cautions=("Test caution sentence.",),
+            delivers=self.delivers,
         )
 
 
 def routes() -> tuple[LinearRoute, LinearRoute]:
     """Two doubles: a cheap feed with a big fixed energy use, and a dear feed with none.
 
-    Per kg CO2 at demand m [kg]: A = 1.2*1.9 + 0.30*4/m, B = 6.0*1.0; A is cheaper above ~0.32 kg.
+    Per kg CO2 at demand m [kg]: A = 1.2*1.9 + 0.30*4/m (+ a little for its dryer), B = 6.0*1.0
+    (bought dry, no dryer); A is cheaper above about 0.32 kg.
     """
     return (LinearRoute("double-a", "Double A (bicarbonate)", "sodium-bicarbonate", 1.9, 4.0, 2, 0.97),
-            LinearRoute("double-b", "Double B (cylinder)", "co2-cylinder", 1.0, 0.0, 1, 0.999))
+            LinearRoute("double-b", "Double B (cylinder)", "co2-cylinder", 1.0, 0.0, 1, 0.999, "gas"))

@@ -10,6 +10,7 @@ drawn before pint, the route models, CoolProp or Cantera are imported.
 
 from __future__ import annotations
 
+import time
 from typing import Any, Sequence
 
 from rich.text import Text
@@ -30,12 +31,15 @@ from tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
 
 #: A computation slower than this [s] shows the progress bar.
 BUSY_AFTER_S = 0.2
+#: After a valid edit, wait this long [s] for the next key before ranking every route.
+SETTLE_S = 0.15
 
 
 class MainScreen(Filing, Screen):
     """The one working screen."""
 
     CSS_PATH = "main.tcss"
+    AUTO_FOCUS = "#ranking"
     BINDINGS = [
         Binding("f1,question_mark", "app.keys", "keys and help"),
         Binding("ctrl+s", "save", "save the scenario"),
@@ -44,6 +48,7 @@ class MainScreen(Filing, Screen):
         Binding("ctrl+t", "export_ranking", "export the ranking (.md .csv .json)"),
         Binding("ctrl+b", "export_recipe", "export the chosen route's batch (.md .json)"),
         Binding("ctrl+g", "next_pane", "go to the next pane: inputs, ranking, detail"),
+        Binding("ctrl+f", "fill", "detail fills the screen (cautions stay); again: back"),
     ] + [Binding(str(i + 1), f"tab({i})", f"detail tab: {title}") for i, (_, title) in enumerate(TABS)]
 
     def __init__(self, opened: Opened, routes: Sequence[Any] | None = None,
@@ -59,6 +64,8 @@ class MainScreen(Filing, Screen):
         self.outcome: Any = None
         self.sweep: Any = None
         self.curve: Any = None
+        #: route id -> breakthrough curve points of its dryer (``None``: no dryer)
+        self.breakthrough: dict[str, Any] = {}
         self.routes = routes
         self.dirty = False
         self.generation = 0
@@ -96,6 +103,14 @@ class MainScreen(Filing, Screen):
     def on_resize(self) -> None:
         self.set_class(self.size.width < 110, "-narrow")
         self.set_class(self.size.height < 32, "-short")
+        if self.outcome is not None:
+            self._weights_line()
+
+    def action_fill(self) -> None:
+        """Give the route detail the whole screen but the cautions, or give the room back."""
+        self.toggle_class("-fill")
+        if self.has_class("-fill"):
+            self.query_one(RouteDetail).query_one("Tabs").focus()
 
     # -- computing ------------------------------------------------------------------------
 
@@ -119,8 +134,16 @@ class MainScreen(Filing, Screen):
             except Exception as err:  # noqa: BLE001 - a broken price book or route must not stop the form
                 self.app.call_from_thread(self._say, f"could not list options and prices: {err}", True)
         text = self.opened.text if document == self.opened.document else None
+
+        def proceed() -> bool:
+            # typing in bursts: a short wait lets the next key cancel this run before the slow part
+            time.sleep(SETTLE_S if edited_field is not None else 0.0)
+            return not worker.is_cancelled
+
         try:
-            result = outcome(document, self.opened.source, text, self.routes)
+            result = outcome(document, self.opened.source, text, self.routes, proceed)
+            if result is None:
+                return
         except InputError as err:
             if not worker.is_cancelled:
                 self.app.call_from_thread(self._refused, generation, err, edited_field)
@@ -144,9 +167,19 @@ class MainScreen(Filing, Screen):
     @work(exclusive=True, thread=True, group="charts")
     def redraw_charts(self, outcome: Any, generation: int) -> None:
         """Work out the cost-against-batch sweep and the saturation line (thread worker)."""
-        from tui.compute import demand_sweep, saturation_curve
+        from tui.compute import breakthrough_points, demand_sweep, saturation_curve
 
         worker = get_current_worker()
+        curves: dict[str, Any] = {}
+        for row in outcome.comparison.rows:
+            try:
+                curves[row.result.route_id] = breakthrough_points(row.result, outcome.scenario)
+            except Exception as err:  # noqa: BLE001 - a chart that cannot be drawn says so
+                curves[row.result.route_id] = None
+                self.app.call_from_thread(self._say, f"breakthrough chart of {row.result.route_id}: {err}", True)
+        if worker.is_cancelled:
+            return
+        self.app.call_from_thread(self._curves, generation, curves)
         try:
             curve = saturation_curve(outcome.scenario)
         except Exception as err:  # noqa: BLE001
@@ -155,8 +188,9 @@ class MainScreen(Filing, Screen):
         if worker.is_cancelled:
             return
         self.app.call_from_thread(self._charts, generation, None, curve)
-        sweep = demand_sweep(outcome.scenario, self.routes)
-        if not worker.is_cancelled:
+        sweep = demand_sweep(outcome.scenario, self.routes, known=outcome.comparison,
+                             proceed=lambda: not worker.is_cancelled)
+        if sweep is not None and not worker.is_cancelled:
             self.app.call_from_thread(self._charts, generation, sweep, curve)
 
     def _busy(self, generation: int) -> None:
@@ -164,6 +198,8 @@ class MainScreen(Filing, Screen):
             self._busy_timer = self.set_timer(BUSY_AFTER_S, self._show_busy)
 
     def _show_busy(self) -> None:
+        if self._busy_timer is None:  # the answer came in while this call was on its way
+            return
         self.query_one("#busy").display = True
         self._say("working out every route…")
 
@@ -199,6 +235,7 @@ class MainScreen(Filing, Screen):
             return
         self._idle()
         self.outcome = outcome
+        self.breakthrough = {}
         self.query_one(ScenarioForm).clear_marks()
         comparison = outcome.comparison
         self.query_one(RankingTable).show(comparison.rows)
@@ -213,6 +250,12 @@ class MainScreen(Filing, Screen):
         else:
             self._say(ranked, bool(comparison.failures))
         self.redraw_charts(outcome, generation)
+
+    def _curves(self, generation: int, curves: dict[str, Any]) -> None:
+        if generation != self.generation:
+            return
+        self.breakthrough = curves
+        self._show_selected()
 
     def _charts(self, generation: int, sweep: Any, curve: Any) -> None:
         if generation != self.generation:
@@ -237,18 +280,21 @@ class MainScreen(Filing, Screen):
     def _show_selected(self) -> None:
         row = self.selected_row()
         comparison = self.outcome.comparison
-        self.query_one(RouteDetail).show(row, comparison.currency, comparison.end_product)
+        curve = self.breakthrough.get(row.result.route_id) if row is not None else None
+        self.query_one(RouteDetail).show(row, comparison.currency, comparison.end_product, curve)
         self.query_one(CautionPanel).show(row)
 
     def _weights_line(self) -> None:
         weights = self.outcome.comparison.weights
         table = self.query_one(RankingTable)
+        narrow = self.has_class("-narrow")
         line = Text("weights ", style="bold")
         for key, value in weights.items():
             style = "reverse" if key == table.sort_key else ""
             line.append(f"{key} {value:g}", style=style)
-            line.append("  ")
-        line.append("(sort: r c e t h w p z · weight: + -)", style="dim")
+            line.append(" " if narrow else "  ")
+        if not self.has_class("-narrow"):
+            line.append("(sort: r c e t h w p z · weight: + -)", style="dim")
         self.query_one("#weights-line", Static).update(line)
 
     def _title(self) -> None:

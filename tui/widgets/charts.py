@@ -44,18 +44,21 @@ class CostCurve(_Chart):
         if sweep is None or not sweep.cost_per_kg:
             self.empty("cost per kg against batch size: no routes to draw")
             return
-        plt = self._start(f"cost per kg CO2 ({sweep.currency}) against CO2 per batch")
+        plt = self._start(f"{sweep.currency} per kg against kg per batch")
         drawn = 0
         for rid, costs in sweep.cost_per_kg.items():
             pts = [(x, y) for x, y in zip(sweep.co2_kg, costs) if y is not None and math.isfinite(y)]
             if pts:
-                plt.plot([p[0] for p in pts], [p[1] for p in pts], label=sweep.labels.get(rid, rid),
+                plt.plot([p[0] for p in pts], [p[1] for p in pts], label=sweep.labels.get(rid, rid)[:22],
                          marker="braille")
                 drawn += 1
         if not drawn:
             self.empty("cost per kg against batch size: every price is unknown")
             return
         plt.xscale("log")
+        known = [y for costs in sweep.cost_per_kg.values() for y in costs if y and math.isfinite(y) and y > 0]
+        if known and max(known) > 20 * min(known):
+            plt.yscale("log")  # one dear route would flatten all the others
         plt.xlabel("kg CO2 per batch")
         if current_kg:
             plt.vline(current_kg, "gray")
@@ -71,13 +74,11 @@ class SaturationPlot(_Chart):
         if curve is None:
             self.empty("saturation line: not worked out yet")
             return
-        plt = self._start("CO2 saturation line: liquid above, gas below")
+        plt = self._start("CO2 saturation: bar against degC")
         plt.plot([t - 273.15 for t in curve.temperatures_k], [p / 1e5 for p in curve.pressures_pa],
                  label="saturation", marker="braille")
         for label, t, p in curve.marks:
             plt.scatter([t - 273.15], [p / 1e5], label=f"{label} {p / 1e5:.1f} bar", marker="●")
-        plt.xlabel("temperature, degC")
-        plt.ylabel("bar")
         self.showing = "saturation line with " + ", ".join(m[0] for m in curve.marks)
         self.refresh()
 
@@ -88,13 +89,11 @@ class BreakthroughPlot(_Chart):
     def draw(self, points: tuple[Sequence[float], Sequence[float], str] | None) -> None:
         """Draw ``(hours, values, y label)`` from :func:`tui.compute.breakthrough_points`."""
         if points is None:
-            self.empty("breakthrough curve: this result carries none")
+            self.empty("breakthrough curve: no dryer, or not worked out yet")
             return
         hours, values, label = points
-        plt = self._start("dryer breakthrough: outlet water against hours on stream")
+        plt = self._start(f"breakthrough: {label} against hours")
         plt.plot(list(hours), list(values), marker="braille")
-        plt.xlabel("hours on stream")
-        plt.ylabel(label)
         self.showing = "breakthrough curve"
         self.refresh()
 

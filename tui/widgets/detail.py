@@ -2,8 +2,8 @@
 and the cost-against-batch chart for every route. The cautions sit in their own panel beside it
 (:class:`CautionPanel`) so they stay on screen whichever tab is open.
 
-Dryer and delivery results are shown when the comparison row carries them (``row.dryer``,
-``row.delivery``); their numeric fields are laid out by the unit in their names.
+Dryer and delivery results are shown when the route's result carries them (``result.dryer``,
+``result.delivery``); their numeric fields are laid out by the unit in their names.
 """
 
 from __future__ import annotations
@@ -20,7 +20,6 @@ from textual.widgets import Static, TabbedContent, TabPane
 
 from sources.compare import heat_words
 from thermo.cautions import LOCAL_CODES
-from tui.compute import breakthrough_points
 from tui.output import format_value, label_of
 from tui.widgets import css_of
 from tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, SaturationPlot
@@ -57,6 +56,39 @@ def facts(obj: Any, skip: tuple[str, ...] = ()) -> Table:
     return table
 
 
+#: The dryer figures a user reads first: (attribute, label, how to show its value).
+DRYER_LINES: tuple[tuple[str, str, Any], ...] = (
+    ("desiccant", "desiccant", str),
+    ("bed_mass_kg", "bed mass", lambda v: f"{v:.3f} kg"),
+    ("bed_volume_m3", "bed volume", lambda v: f"{v * 1000:.2f} L"),
+    ("bed_diameter_m", "bed diameter", lambda v: f"{v * 1000:.0f} mm"),
+    ("bed_length_m", "bed length", lambda v: f"{v * 1000:.0f} mm"),
+    ("inlet_water_ppmv", "water in", lambda v: f"{v:.0f} ppmv"),
+    ("inlet_dew_point_k", "inlet dew point", lambda v: format_value("t_k", v)),
+    ("outlet_ppmv", "water out", lambda v: f"{v:.1f} ppmv"),
+    ("outlet_dew_point_k", "outlet dew point", lambda v: format_value("t_k", v)),
+    ("target_dew_point_k", "target dew point", lambda v: format_value("t_k", v)),
+    ("reaches_target", "reaches the target", lambda v: "yes" if v else "NO"),
+    ("breakthrough_s", "breakthrough after", lambda v: f"{v / 3600:.1f} h on stream"),
+    ("water_load_kg_per_cycle", "water taken per cycle", lambda v: f"{v:.3f} kg"),
+    ("pressure_drop_pa", "pressure drop", lambda v: f"{v:.0f} Pa"),
+    ("superficial_velocity_m_s", "gas speed", lambda v: f"{v:.3f} m/s"),
+    ("regeneration_heat_j", "regeneration heat", lambda v: f"{v / 3.6e6:.3f} kWh per cycle"),
+    ("suggested_desiccant", "better desiccant", str),
+)
+
+
+def dryer_table(dryer: Any) -> Table:
+    """The dryer bed in the words of :data:`DRYER_LINES` (fields it lacks are left out)."""
+    table = _table("", "")
+    table.show_header = False
+    for attr, label, show in DRYER_LINES:
+        value = getattr(dryer, attr, None)
+        if value is not None:
+            table.add_row(Text(label, style="dim"), show(value))
+    return table
+
+
 def recipe(row: Any, currency: str) -> Group:
     """The Batch tab: what to buy and weigh, what is left, heat, time and energy."""
     r = row.result
@@ -66,8 +98,8 @@ def recipe(row: Any, currency: str) -> Group:
         buy.add_row(g.name, g.formula, _n(g.mass_kg), "–" if g.volume_l is None else f"{g.volume_l:.2f}",
                     _n(g.pure_mass_kg),
                     _n(costs.get(g.name), "{:.2f}"))
-    parts: list[Any] = [Text(f"{r.label}: {r.co2_kg:.3f} kg CO2 delivered, {r.co2_generated_kg:.3f} kg made",
-                             style="bold"), buy]
+    parts: list[Any] = [Text(f"{r.label}: {r.co2_kg:.3f} kg CO2 delivered, {r.co2_generated_kg:.3f} kg made"
+                             f" (rank {row.rank}, score {row.score:.3f}: 0 best, 1 worst)", style="bold"), buy]
     if r.byproducts:
         left = _table("left over", "formula", "kg", "note")
         for b in r.byproducts:
@@ -93,11 +125,11 @@ def gas(row: Any) -> Group:
     parts: list[Any] = [mix, Text(f"at {format_value('t_k', r.raw_gas.temperature_k)}, "
                                   f"{format_value('p_pa', r.raw_gas.pressure_pa)}"),
                         Text(f"water carried {r.water_g_per_kg_co2:.1f} g per kg CO2"), Text("")]
-    dryer = getattr(row, "dryer", None)
+    dryer = getattr(r, "dryer", None)
     if dryer is None:
-        parts.append(Text("dryer bed: not sized for this route (no dryer result)", style="dim"))
+        parts.append(Text("dryer bed: none for this route (bought dry, or already dry enough)", style="dim"))
     else:
-        parts += [Text("dryer bed", style="bold"), facts(dryer, skip=("breakthrough_curve",))]
+        parts += [Text("dryer bed", style="bold"), dryer_table(dryer)]
         parts += [Text(f"! {w}", style="yellow") for w in getattr(dryer, "warnings", ())]
     return Group(*parts)
 
@@ -106,7 +138,7 @@ def delivery(row: Any, end_product: str) -> Group:
     """The Delivery tab's text: compression, storage and dry ice when the scenario asks."""
     r = row.result
     parts: list[Any] = [Text(f"end product {end_product}; this route hands over {r.delivers}", style="bold")]
-    result = getattr(row, "delivery", None)
+    result = getattr(r, "delivery", None)
     if result is None:
         need = "none needed: gas at about 1 atm" if end_product == "gas" else "no delivery result"
         parts.append(Text(f"compression, storage, dry ice: {need}", style="dim"))
@@ -150,9 +182,10 @@ class CautionPanel(VerticalScroll):
             r = row.result
             lines.append(Text.assemble(("hazard ", "bold"), (f"{r.hazard}", "bold"), f": {r.hazard_reason}"))
             lines += [Text(f"! {w}", style="yellow") for w in r.warnings]
-            for extra in (getattr(row, "dryer", None), getattr(row, "delivery", None)):
-                lines += [Text(f"• {c}") for c in getattr(extra, "cautions", ())]
-            lines += [Text(f"• {c}") for c in r.cautions]
+            cautions = list(r.cautions)
+            for extra in (getattr(r, "dryer", None), getattr(r, "delivery", None)):
+                cautions += [c for c in getattr(extra, "cautions", ()) if c not in cautions]
+            lines += [Text(f"• {c}") for c in cautions]
         lines.append(Text(LOCAL_CODES, style="bold"))
         self.query_one("#caution-text", Static).update(Group(*lines))
 
@@ -181,8 +214,9 @@ class RouteDetail(Vertical):
             with TabPane(TABS[4][1], id=TABS[4][0]):
                 yield CostCurve(id="cost-curve")
 
-    def show(self, row: Any | None, currency: str, end_product: str) -> None:
-        """Fill every tab from ``row`` (a comparison row), or say that nothing is selected."""
+    def show(self, row: Any | None, currency: str, end_product: str, curve: Any = None) -> None:
+        """Fill every tab from ``row`` (a comparison row), or say that nothing is selected;
+        ``curve`` is its dryer's breakthrough curve (:func:`tui.compute.breakthrough_points`)."""
         if row is None:
             for name in ("recipe", "gas", "delivery", "costs"):
                 self.query_one(f"#{name}", Static).update(Text("no route to show", style="dim"))
@@ -196,7 +230,7 @@ class RouteDetail(Vertical):
         self.query_one("#gas-bars", Bars).draw("raw gas, mol %", [k for k, _ in mix], [v * 100 for _, v in mix])
         self.query_one("#cost-bars", Bars).draw(f"cost of one batch, {currency}", [c.item for c in r.costs],
                                                 [c.cost for c in r.costs])
-        self.query_one("#breakthrough", BreakthroughPlot).draw(breakthrough_points(getattr(row, "dryer", None)))
+        self.query_one("#breakthrough", BreakthroughPlot).draw(curve)
 
     def show_curve(self, sweep: Any, current_kg: float | None) -> None:
         """Draw the cost-against-batch chart."""

@@ -65,9 +65,10 @@ COLUMNS: tuple[Column, ...] = (
     Column("purity", "CO2 %", lambda r: r.result.raw_gas.co2_mole_fraction, "{:.1%}", True,
            criterion="purity"),
     Column("hazard", "hazard", lambda r: r.result.hazard, "{:d}", criterion="hazard"),
-    Column("score", "score", lambda r: r.score, "{:.3f}"),
 )
 COLUMN_BY_KEY = {c.key: c for c in COLUMNS}
+#: Width of the route column [cells]; longer labels end in an ellipsis (the detail has them whole).
+ROUTE_WIDTH = 20
 
 
 def cell_text(column: Column, row: Any) -> str:
@@ -111,7 +112,7 @@ class RankingTable(DataTable):
 
     def on_mount(self) -> None:
         for column in COLUMNS:
-            self.add_column(column.heading, key=column.key)
+            self.add_column(column.heading, key=column.key, width=ROUTE_WIDTH if column.key == "route" else None)
 
     def show(self, rows: tuple[Any, ...]) -> None:
         """Show ``rows`` (a comparison's rows) in the current sort order, keeping the selection."""
@@ -134,6 +135,8 @@ class RankingTable(DataTable):
             for c in COLUMNS:
                 text = cell_text(c, row)
                 style = "bold" if row.rank == 1 else ""
+                if c.key == "route" and len(text) > ROUTE_WIDTH:
+                    text = text[: ROUTE_WIDTH - 1] + "…"
                 cells.append(Text(text, style=style, justify="left" if c.key == "route" else "right"))
             self.add_row(*cells, key=row.result.route_id)
         self._label_headers()
