@@ -106,8 +106,9 @@ def test_dew_point_of_saturated_gas_at_100_c():
 @example(273.16)
 @example(273.1599)
 def test_dew_point_inverts_vapor_pressure(t_k):
-    # round trip through both branches; 1e-6 K
-    assert water.dew_point(water.vapor_pressure(t_k)) == pytest.approx(t_k, abs=1e-6)
+    # round trip through both branches; 1e-5 K: CoolProp 6.8's saturation solver converges to
+    # about 1e-7 relative in pressure, a few 1e-6 K just above the triple point
+    assert water.dew_point(water.vapor_pressure(t_k)) == pytest.approx(t_k, abs=1e-5)
 
 
 def test_relative_humidity_against_magnus():
