@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import argparse
 import importlib
+import re
 import sys
 from typing import Sequence
 
@@ -42,6 +43,12 @@ class _Parser(argparse.ArgumentParser):
     def error(self, message: str) -> None:  # noqa: D401 - argparse hook
         self.exit(2, f"{self.prog}: error: {' '.join(message.split())}\n")
 
+    def _parse_optional(self, arg_string: str):  # argparse hook
+        # "-20degC", "-4 degF", "-1.5kg" are values, not options: no option starts with a digit
+        if re.match(r"^-\.?\d", arg_string):
+            return None
+        return super()._parse_optional(arg_string)
+
 
 def build_parser() -> argparse.ArgumentParser:
     """The full parser, with one sub-parser per verb."""
@@ -55,7 +62,8 @@ def build_parser() -> argparse.ArgumentParser:
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
     for name in COMMANDS:
         module = importlib.import_module(f"tui.commands.{name}")
-        p = sub.add_parser(module.NAME, help=module.HELP, description=module.HELP)
+        text = module.HELP.replace("%", "%%")  # argparse %-formats help strings
+        p = sub.add_parser(module.NAME, help=text, description=module.HELP)
         module.add_arguments(p)
         if getattr(module, "WANTS_FORMAT_FLAGS", True):
             p.add_argument("--json", action="store_true", help="print the answer as JSON (SI units)")
