@@ -57,7 +57,7 @@ class Co2RoutesApp(App[int]):
         """Show every key."""
         if isinstance(self.screen, KeysScreen):
             return
-        sections = [("Anywhere", binding_rows(self.BINDINGS) + binding_rows(MainScreen.BINDINGS)),
+        sections = [("Anywhere (digits and ? when not typing in a field)", binding_rows(self.BINDINGS) + binding_rows(MainScreen.BINDINGS)),
                     ("In the ranking", binding_rows(RankingTable.BINDINGS))]
         self.push_screen(KeysScreen(sections))
 

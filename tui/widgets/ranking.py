@@ -68,7 +68,7 @@ COLUMNS: tuple[Column, ...] = (
 )
 COLUMN_BY_KEY = {c.key: c for c in COLUMNS}
 #: Width of the route column [cells]; longer labels end in an ellipsis (the detail has them whole).
-ROUTE_WIDTH = 20
+ROUTE_WIDTH = 18
 
 
 def cell_text(column: Column, row: Any) -> str:
