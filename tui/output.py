@@ -67,9 +67,11 @@ def format_value(key: str, value: Any) -> str:
     '25.00 °C (298.15 K)'
     >>> format_value("cost_per_kg", None)
     'unknown'
+    >>> format_value("temperature_change_k", -14.27)
+    '-14.27 K'
     """
     if value is None:
-        return "unknown"
+        return "–" if key == "volume_l" else "unknown"
     if isinstance(value, bool):
         return "yes" if value else "no"
     if isinstance(value, (int, float)):
@@ -79,6 +81,8 @@ def format_value(key: str, value: Any) -> str:
                 shown = value * factor + offset
                 if suffix == "_pa":
                     return f"{_num(shown)} bar ({_num(value / 6894.757293168361)} psi)"
+                if suffix == "_k" and _is_difference(key):
+                    return f"{value:+.2f} K"
                 if suffix == "_k":
                     return f"{shown:.2f} °C ({value:.2f} K)"
                 return f"{_num(shown)} {unit}"
@@ -86,6 +90,15 @@ def format_value(key: str, value: Any) -> str:
     if isinstance(value, (list, tuple)):
         return ", ".join(str(v) for v in value)
     return str(value)
+
+
+def _is_difference(key: str) -> bool:
+    """Whether a ``_k`` key is a temperature difference rather than a temperature.
+
+    >>> _is_difference("temperature_change_k"), _is_difference("dew_point_k")
+    (True, False)
+    """
+    return any(word in key for word in ("change", "difference", "rise", "drop_k", "delta"))
 
 
 def _num(x: float) -> str:
