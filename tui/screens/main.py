@@ -10,32 +10,26 @@ drawn before pint, the route models, CoolProp or Cantera are imported.
 
 from __future__ import annotations
 
-import time
 from typing import Any, Sequence
 
 from rich.text import Text
-from textual import on, work
+from textual import on
 from textual.app import ComposeResult
 from textual.binding import Binding
 from textual.containers import Horizontal, Vertical
 from textual.screen import Screen
 from textual.widgets import Input, ProgressBar, Static
-from textual.worker import get_current_worker
 
-from tui.fields import BASE_FIELDS, Field, match_field, option_fields, price_fields, price_value
+from tui.fields import BASE_FIELDS, Field, match_field, price_value
 from tui.screens.filing import Filing
+from tui.screens.working import Working
 from tui.session import Opened, edited, value_at
 from tui.widgets.detail import TABS, CautionPanel, RouteDetail
 from tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
 from tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
 
-#: A computation slower than this [s] shows the progress bar.
-BUSY_AFTER_S = 0.2
-#: After a valid edit, wait this long [s] for the next key before ranking every route.
-SETTLE_S = 0.15
 
-
-class MainScreen(Filing, Screen):
+class MainScreen(Filing, Working, Screen):
     """The one working screen."""
 
     CSS_PATH = "main.tcss"
@@ -119,96 +113,6 @@ class MainScreen(Filing, Screen):
         self.generation += 1
         self.recompute(self.document, self.generation, edited_field)
 
-    @work(exclusive=True, thread=True, group="compute")
-    def recompute(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
-        """Validate and rank (thread worker); hands the answer to the UI thread."""
-        from thermo.errors import InputError
-        from tui.compute import outcome
-
-        worker = get_current_worker()
-        self.app.call_from_thread(self._busy, generation)
-        if not self._extras:
-            self._extras = True
-            try:
-                self._load_extras()
-            except Exception as err:  # noqa: BLE001 - a broken price book or route must not stop the form
-                self.app.call_from_thread(self._say, f"could not list options and prices: {err}", True)
-        text = self.opened.text if document == self.opened.document else None
-
-        def proceed() -> bool:
-            # typing in bursts: a short wait lets the next key cancel this run before the slow part
-            time.sleep(SETTLE_S if edited_field is not None else 0.0)
-            return not worker.is_cancelled
-
-        try:
-            result = outcome(document, self.opened.source, text, self.routes, proceed)
-            if result is None:
-                return
-        except InputError as err:
-            if not worker.is_cancelled:
-                self.app.call_from_thread(self._refused, generation, err, edited_field)
-            return
-        except Exception as err:  # noqa: BLE001 - a defect must not take the user's work with it
-            if not worker.is_cancelled:
-                self.app.call_from_thread(self._failed, generation, err)
-            return
-        if not worker.is_cancelled:
-            self.app.call_from_thread(self._computed, generation, result)
-
-    def _load_extras(self) -> None:
-        from sources.prices import load_book
-        from sources.registry import catalogue
-
-        routes = self.routes if self.routes is not None else catalogue().routes
-        self.book = load_book()
-        fields = option_fields(routes) + price_fields(self.book)
-        self.app.call_from_thread(self.query_one(ScenarioForm).add_fields, fields, self.document)
-
-    @work(exclusive=True, thread=True, group="charts")
-    def redraw_charts(self, outcome: Any, generation: int) -> None:
-        """Work out the cost-against-batch sweep and the saturation line (thread worker)."""
-        from tui.compute import breakthrough_points, demand_sweep, saturation_curve
-
-        worker = get_current_worker()
-        curves: dict[str, Any] = {}
-        for row in outcome.comparison.rows:
-            try:
-                curves[row.result.route_id] = breakthrough_points(row.result, outcome.scenario)
-            except Exception as err:  # noqa: BLE001 - a chart that cannot be drawn says so
-                curves[row.result.route_id] = None
-                self.app.call_from_thread(self._say, f"breakthrough chart of {row.result.route_id}: {err}", True)
-        if worker.is_cancelled:
-            return
-        self.app.call_from_thread(self._curves, generation, curves)
-        try:
-            curve = saturation_curve(outcome.scenario)
-        except Exception as err:  # noqa: BLE001
-            curve = None
-            self.app.call_from_thread(self._say, f"saturation chart: {err}", True)
-        if worker.is_cancelled:
-            return
-        self.app.call_from_thread(self._charts, generation, None, curve)
-        sweep = demand_sweep(outcome.scenario, self.routes, known=outcome.comparison,
-                             proceed=lambda: not worker.is_cancelled)
-        if sweep is not None and not worker.is_cancelled:
-            self.app.call_from_thread(self._charts, generation, sweep, curve)
-
-    def _busy(self, generation: int) -> None:
-        if self._busy_timer is None:
-            self._busy_timer = self.set_timer(BUSY_AFTER_S, self._show_busy)
-
-    def _show_busy(self) -> None:
-        if self._busy_timer is None:  # the answer came in while this call was on its way
-            return
-        self.query_one("#busy").display = True
-        self._say("working out every route…")
-
-    def _idle(self) -> None:
-        if self._busy_timer is not None:
-            self._busy_timer.stop()
-            self._busy_timer = None
-        self.query_one("#busy").display = False
-
     def _refused(self, generation: int, err: Any, edited_field: Field | None) -> None:
         if generation != self.generation:
             return
@@ -238,7 +142,9 @@ class MainScreen(Filing, Screen):
         self.breakthrough = {}
         self.query_one(ScenarioForm).clear_marks()
         comparison = outcome.comparison
-        self.query_one(RankingTable).show(comparison.rows)
+        table = self.query_one(RankingTable)
+        table.show(comparison.rows)
+        table.border_title = f"Routes, best first · {comparison.end_product} · prices in {comparison.currency}"
         self._weights_line()
         self._show_selected()
         self._title()
