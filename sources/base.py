@@ -11,11 +11,20 @@ Every quantity here is SI (kg, K, Pa, s) except where a field name says otherwis
 
 from __future__ import annotations
 
+import re
 from dataclasses import dataclass, field
 from typing import Any, Mapping, Protocol, runtime_checkable
 
 from thermo.errors import InputError
 from thermo.units import parse
+
+
+#: Short symbols of the SI units of :data:`thermo.units.DIMENSIONS`, for messages.
+_SI_SYMBOLS = {"kelvin": "K", "pascal": "Pa", "meter ** 3": "m**3", "kilogram": "kg", "meter": "m",
+               "meter ** 2": "m**2", "second": "s", "joule": "J", "watt": "W",
+               "kilogram / second": "kg/s", "meter ** 3 / second": "m**3/s",
+               "kilogram / meter ** 3": "kg/m**3", "meter / second": "m/s", "delta_degC": "K",
+               "watt / meter ** 2 / kelvin": "W/(m**2 K)"}
 
 
 @dataclass(frozen=True, slots=True)
@@ -64,7 +73,53 @@ class Option:
 
     def _check_range(self, name: str, number: float, text: object) -> None:
         if (self.low is not None and number < self.low) or (self.high is not None and number > self.high):
-            raise InputError(name, f"must lie between {self.low:g} and {self.high:g} (SI units)", got=text)
+            raise InputError(name, self.range_text(), got=text)
+
+    def range_text(self) -> str:
+        """What the option allows, in the unit its default is written in (SI when it has none).
+
+        >>> Option("gas_rate", "gas rate", "mass_flow", "1 kg/h", low=1e-4, high=0.01).range_text()
+        'must lie between 0.36 kg/h and 36 kg/h'
+        >>> Option("excess", "excess", "fraction", "5 %", low=0.0, high=1.0).range_text()
+        'must lie between 0 % and 100 %'
+        >>> Option("people", "people", "count", "4", low=1, high=1000).range_text()
+        'must be a whole number from 1 to 1000'
+        >>> Option("depth", "depth", "length", "site", low=0.01).range_text()
+        'must be at least 0.01 m'
+        >>> Option("t", "fermenter temperature", "temperature", "site", low=278.15, high=313.15).range_text()
+        'must lie between 5 degC and 40 degC'
+        """
+        if self.dimension == "count":
+            if self.low is not None and self.high is not None:
+                return f"must be a whole number from {self.low:g} to {self.high:g}"
+            return f"must be a whole number of at least {self.low:g}" if self.low is not None \
+                else f"must be a whole number of at most {self.high:g}"
+        show = self._shown_in()
+        if self.low is not None and self.high is not None:
+            return f"must lie between {show(self.low)} and {show(self.high)}"
+        return f"must be at least {show(self.low)}" if self.low is not None else f"must be at most {show(self.high)}"
+
+    def _shown_in(self):
+        """A formatter of SI values in the unit of the default (``"5 kPa"`` -> kPa)."""
+        from thermo.units import DIMENSIONS, to_unit
+
+        match = re.match(r"^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*(\S.*)?$", self.default)
+        unit = (match.group(1) or "").strip() if match else None
+        if self.dimension == "fraction":
+            if unit == "%":
+                return lambda v: f"{100.0 * v:.4g} %"
+            return lambda v: f"{v:.4g}"
+        si_unit = DIMENSIONS.get(self.dimension, ("", ""))[0]
+        if self.dimension == "temperature" and not (unit and unit[0].isalpha()):
+            unit = "degC"  # a named default such as "site": temperatures read best in degC
+        if unit:
+            try:
+                to_unit(1.0, self.dimension, unit)
+                return lambda v: f"{to_unit(v, self.dimension, unit):.4g} {unit}"
+            except Exception:  # noqa: BLE001 - an odd default only changes how the range is shown
+                pass
+        symbol = _SI_SYMBOLS.get(si_unit, si_unit)
+        return lambda v: f"{v:.4g} {symbol}".rstrip()
 
 
 @dataclass(frozen=True, slots=True)

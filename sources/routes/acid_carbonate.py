@@ -203,6 +203,30 @@ def plan(request: RouteRequest) -> Batch:
                  added_water_kg * scale, tuple(warnings))
 
 
+def _deg_c(t_k: float) -> str:
+    """A temperature in whole degC for a sentence, never "-0".
+
+    >>> _deg_c(272.9), _deg_c(293.15)
+    ('0', '20')
+    """
+    return str(round(t_k - 273.15) + 0)
+
+
+def _mixing_order(acid: str, acid_reagent: Reagent, carbonate_label: str, water_kg: float) -> str:
+    """The order in which a technician mixes the batch (common practice: acid into water, never
+    water into acid, and the solid added in portions so that the foam stays in the vessel)."""
+    portions = f"then add the {carbonate_label} in small portions, as the foam allows"
+    if acid == "citric":
+        return (f"Mix: dissolve the {acid_reagent.mass_kg:.3g} kg citric acid in {water_kg:.3g} kg of "
+                f"water, {portions}.")
+    volume = "" if acid_reagent.volume_l is None else f" ({acid_reagent.volume_l:.3g} L)"
+    if water_kg > 0.0:
+        return (f"Mix: put {water_kg:.3g} kg of water in the vessel first, pour the "
+                f"{acid_reagent.mass_kg:.3g} kg{volume} of {acid_reagent.name} slowly into it, {portions}.")
+    return (f"Mix: put the {carbonate_label} in the vessel and pour the {acid_reagent.mass_kg:.3g} kg"
+            f"{volume} of {acid_reagent.name} onto it slowly, as the foam allows.")
+
+
 def _water_needed(heat_j: float, liquor_kg: float, t_site: float, acid_solution_kg: float,
                   added: float) -> float:
     """Water per kg of acid solution that keeps an adiabatic liquor at 80 degC [kg/kg]."""
@@ -248,7 +272,8 @@ def compute(request: RouteRequest) -> RouteResult:
     notes = [f"Reaction: {batch.equation}; {carb_label} is the limiting reagent, "
              f"{opt['acid_excess']:.0%} acid excess.",
              f"Of {generated_kg:.3g} kg CO2 made, {dissolved_kg:.3g} kg stays dissolved in the liquor "
-             f"at {batch.liquor_temperature_k - 273.15:.0f} degC (Henry's law, Sander 2015).",
+             f"at {_deg_c(batch.liquor_temperature_k)} degC (Henry's law, Sander 2015).",
+             _mixing_order(acid, acid_reagent, carb_label, water_kg),
              "Batch time: CO2 made divided by the gas rate foaming allows (common practice)."]
     for name, kg in salts.items():
         limit = SALT_SOLUBILITY.get(name)
@@ -269,11 +294,11 @@ def compute(request: RouteRequest) -> RouteResult:
         warnings.append(f"{w:.0%} sulfuric acid heats violently on meeting water: pour it slowly into "
                         "the water already in the vessel, never the reverse.")
     if batch.liquor_temperature_k < request.site.temperature_k - 10.0:
-        warnings.append(f"The liquor cools to about {batch.liquor_temperature_k - 273.15:.0f} degC "
+        warnings.append(f"The liquor cools to about {_deg_c(batch.liquor_temperature_k)} degC "
                         "(adiabatic): the room warms it back, but a cold batch reacts more slowly and "
                         "keeps more CO2 dissolved (below 0 degC estimated with Henry's law at 0 degC).")
     if batch.liquor_temperature_k > 333.15:
-        warnings.append(f"The liquor warms to about {batch.liquor_temperature_k - 273.15:.0f} degC "
+        warnings.append(f"The liquor warms to about {_deg_c(batch.liquor_temperature_k)} degC "
                         "(adiabatic): add water or add the acid more slowly.")
     neutraliser_kg = batch.outputs[acid_sp] * _protons(acid) * species.molar_mass("NaHCO3(s)")
     held = ", ".join(f"{kg:.3g} kg {_formula(n)}" for n, kg in salts.items())

@@ -19,8 +19,10 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 def run(args: argparse.Namespace) -> dict:
     """Write the demo scenario atomically, never over an existing file unless asked."""
     from sources.scenario import demo_text, write_atomic
+    from tui.commands._options import for_option
 
-    text = demo_text(args.which)
+    with for_option("--which"):
+        text = demo_text(args.which)
     if args.file:
         write_atomic(args.file, text, overwrite=args.overwrite)
     args._text = text
