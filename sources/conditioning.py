@@ -28,17 +28,16 @@ class Conditioning:
     cautions: tuple[str, ...]
 
 
-def condition(result: RouteResult, plan, site: Site) -> Conditioning:
-    """Size and charge the dryer for ``result``'s raw gas under the scenario's ``plan``."""
+def dryer_input(result: RouteResult, plan, site: Site) -> tuple[Any | None, tuple[str, ...]]:
+    """The :class:`thermo.dryer.DryerInput` for ``result``'s raw gas, or ``None`` with the reason
+    when no dryer is needed; the second item holds notes for the result."""
     from thermo import water
-    from thermo.desiccants import get_desiccant
-    from thermo.dryer import ISBT_WATER_PPMV, DryerInput, size_dryer
-    from thermo.errors import InputError
+    from thermo.dryer import ISBT_WATER_PPMV, DryerInput
 
     gas = result.raw_gas
     if result.delivers != "raw-gas" or result.time_h <= 0:
-        return Conditioning(None, (), 0.0, (), ())
-    warnings: list[str] = []
+        return None, ()
+    notes: list[str] = []
     # the gas reaches the site's temperature in the line before the dryer; water above
     # saturation there condenses and drains
     temperature = site.temperature_k
@@ -46,23 +45,48 @@ def condition(result: RouteResult, plan, site: Site) -> Conditioning:
     saturated = water.saturated_ppmv(temperature, gas.pressure_pa)
     if ppmv > saturated:
         if gas.temperature_k > temperature:
-            warnings.append(f"Raw gas leaves at {gas.temperature_k - 273.15:.0f} degC: cool it to "
-                            f"{temperature - 273.15:.0f} degC before the dryer and drain the condensate.")
+            notes.append(f"Raw gas leaves at {gas.temperature_k - 273.15:.0f} degC: cool it to "
+                         f"{temperature - 273.15:.0f} degC before the dryer and drain the condensate.")
         ppmv = saturated
     if plan.target_dew_point_k is not None:
         target = water.ppmv_from_dew_point(plan.target_dew_point_k, gas.pressure_pa)
     else:
         target = plan.target_ppmv if plan.target_ppmv is not None else ISBT_WATER_PPMV
     if ppmv <= target:
-        return Conditioning(None, (), 0.0, ("Raw gas is already as dry as the target: no dryer needed.",), ())
+        return None, ("Raw gas is already as dry as the target: no dryer needed.",)
     dry = {k: v for k, v in gas.mole_fractions.items() if k != "H2O" and v > 0}
+    inp = DryerInput(
+        co2_flow_kg_s=result.co2_kg / (result.time_h * 3600.0),
+        inlet_temperature_k=temperature, desiccant=plan.desiccant, cycle_s=plan.cycle_s,
+        inlet_pressure_pa=gas.pressure_pa, inlet_water_ppmv=ppmv,
+        target_ppmv=target, dry_composition=dry,
+    )
+    return inp, tuple(notes)
+
+
+def breakthrough(result: RouteResult, plan, site: Site, points: int = 41):
+    """The breakthrough curve of the bed sized for ``result`` (``thermo.dryer.CurvePoint``s),
+    or ``None`` when the route has no dryer."""
+    from thermo.dryer import breakthrough_curve
+
+    inp, _ = dryer_input(result, plan, site)
+    if inp is None or result.dryer is None:
+        return None
+    return breakthrough_curve(inp, result.dryer, points)
+
+
+def condition(result: RouteResult, plan, site: Site) -> Conditioning:
+    """Size and charge the dryer for ``result``'s raw gas under the scenario's ``plan``."""
+    from thermo.desiccants import get_desiccant
+    from thermo.dryer import size_dryer
+    from thermo.errors import InputError
+
+    inp, notes = dryer_input(result, plan, site)
+    warnings = list(notes)
+    if inp is None:
+        return Conditioning(None, (), 0.0, tuple(warnings), ())
     try:
-        bed = size_dryer(DryerInput(
-            co2_flow_kg_s=result.co2_kg / (result.time_h * 3600.0),
-            inlet_temperature_k=temperature, desiccant=plan.desiccant, cycle_s=plan.cycle_s,
-            inlet_pressure_pa=gas.pressure_pa, inlet_water_ppmv=ppmv,
-            target_ppmv=target, dry_composition=dry,
-        ))
+        bed = size_dryer(inp)
     except InputError as err:
         if err.field == "desiccant":
             raise InputError("dryer.desiccant", err.allowed, got=err.got) from None

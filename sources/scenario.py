@@ -156,7 +156,11 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
     try:
         co2_kg = parse(demand_text, where(None, "demand"), "mass")
     except InputError:
-        rate = parse(demand_text, where(None, "demand"),  "mass_flow")
+        try:
+            rate = parse(demand_text, where(None, "demand"), "mass_flow")
+        except InputError:
+            raise InputError(where(None, "demand"), "must be a mass per batch such as '3 kg' or a rate "
+                             "such as '1.5 kg/day'", got=repr(demand_text)) from None
         batch_s = q(None, "batch", "time", "1 day", positive=True)
         co2_kg = rate * batch_s
     if not co2_kg > 0.0:
@@ -216,7 +220,10 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
     currency = document.get("currency")
     if currency is not None and str(currency) != book.currency:
         raise InputError(where(None, "currency"), f"must match the price book's currency {book.currency}", got=currency)
-    prices = book.overridden(sections["prices"], f"{source}: prices")
+    prices = book
+    for key, raw in sections["prices"].items():  # one at a time, so that an error names its line
+        line = _line_of(text, "prices", key)
+        prices = prices.overridden({key: raw}, f"{source}, line {line}: prices" if line else f"{source}: prices")
     return Scenario(
         name=str(document.get("name", "unnamed scenario")), note=str(document.get("note", "")),
         co2_kg=co2_kg, batch_s=batch_s, end_product=end_product, site=site, dryer=dryer,

@@ -133,19 +133,13 @@ def breakthrough_points(result: Any, scenario: Any, points: int = 41
     """The breakthrough curve of the dryer sized for ``result`` as ``(hours, outlet ppmv, label)``,
     from :func:`thermo.dryer.breakthrough_curve`; ``None`` when the route needs no dryer.
 
-    The curve needs only the inlet state besides the sized bed: the bed takes the raw gas at the
-    site's temperature and the raw gas's pressure, as :func:`sources.conditioning.condition`
-    sizes it.
+    The inlet is rebuilt by :func:`sources.conditioning.breakthrough` the way the comparison
+    sized the bed.
     """
-    from thermo.dryer import DryerInput, breakthrough_curve
+    from sources.conditioning import breakthrough
 
-    bed = getattr(result, "dryer", None)
-    if bed is None:
+    curve = breakthrough(result, scenario.dryer, scenario.site, points)
+    if curve is None:
         return None
-    inp = DryerInput(co2_flow_kg_s=bed.co2_flow_kg_s, inlet_temperature_k=scenario.site.temperature_k,
-                     desiccant=bed.desiccant, cycle_s=scenario.dryer.cycle_s,
-                     inlet_pressure_pa=result.raw_gas.pressure_pa, inlet_water_ppmv=bed.inlet_water_ppmv,
-                     target_ppmv=bed.target_ppmv)
-    curve = breakthrough_curve(inp, bed, points)
     return (tuple(p.time_s / 3600.0 for p in curve), tuple(p.outlet_ppmv for p in curve),
             "outlet water, ppmv")

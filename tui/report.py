@@ -60,6 +60,54 @@ def grouped_warnings(record: Mapping[str, Any]) -> dict[str, list[str]]:
     return groups
 
 
+def bed_words(dryer: Mapping[str, Any] | None) -> str:
+    """A route's dryer (its ``dryer`` record) in one line.
+
+    >>> bed_words(None)
+    'no dryer'
+    >>> bed_words({"desiccant": "silica-gel", "bed_mass_kg": 0.5, "bed_volume_l": 0.69,
+    ...            "bed_diameter_m": 0.06, "bed_length_m": 0.18, "breakthrough_h": 30.0,
+    ...            "outlet_dew_point_k": 223.15, "reaches_target": True, "target_ppmv": 20.0})
+    'silica-gel 0.500 kg (0.69 L), 6.0 cm across x 18.0 cm deep; breakthrough 30.0 h; outlet dew point -50 °C'
+    """
+    if dryer is None:
+        return "no dryer"
+    text = (f"{dryer['desiccant']} {dryer['bed_mass_kg']:.3f} kg ({dryer['bed_volume_l']:.2f} L), "
+            f"{dryer['bed_diameter_m'] * 100:.1f} cm across x {dryer['bed_length_m'] * 100:.1f} cm deep; "
+            f"breakthrough {dryer['breakthrough_h']:.1f} h; "
+            f"outlet dew point {dryer['outlet_dew_point_k'] - 273.15:.0f} °C")
+    if not dryer["reaches_target"]:
+        text += f" (wetter than the target {dryer['target_ppmv']:.3g} ppmv)"
+    return text
+
+
+def delivery_words(delivery: Mapping[str, Any] | None) -> str:
+    """A route's compression and flash (its ``delivery`` record) in one line.
+
+    >>> delivery_words(None)
+    'gas as made'
+    >>> delivery_words({"end_product": "dry-ice", "raw_co2_kg_per_kg": 1.0, "stages": None,
+    ...                 "solid_fraction": None})
+    'bought as dry ice'
+    """
+    if delivery is None:
+        return "gas as made"
+    product = delivery["end_product"].replace("-", " ")
+    if delivery["stages"] is None and delivery["solid_fraction"] is None:
+        return f"bought as {product}"  # its purchase losses are in the feed per kg
+    if delivery["stages"] is None:
+        parts = ["bought as liquid"]
+    else:
+        parts = [f"condensed at {delivery['condensing_pressure_pa'] / 1e5:.1f} bar "
+                 f"({delivery['condensing_temperature_k'] - 273.15:.0f} °C) in {delivery['stages']} "
+                 f"stages, {delivery['work_kj_per_kg']:.0f} kJ/kg, discharge "
+                 f"{delivery['discharge_temperature_k'] - 273.15:.0f} °C"]
+    if delivery["solid_fraction"] is not None:
+        parts.append(f"{delivery['solid_fraction']:.0%} of the liquid becomes dry ice")
+    parts.append(f"{delivery['raw_co2_kg_per_kg']:.2f} kg CO2 per kg {product}")
+    return "; ".join(parts)
+
+
 def comparison_table(comparison: Comparison) -> str:
     """A plain-text table of the ranking, with each route's cautions after it."""
     record = comparison_record(comparison)
@@ -71,6 +119,15 @@ def comparison_table(comparison: Comparison) -> str:
     lines.append("  ".join("-" * w for w in widths))
     lines += ["  ".join(c.rjust(w) if i != 1 else c.ljust(w) for i, (c, w) in enumerate(zip(row, widths)))
               for row in body]
+    lines.append("")
+    lines.append("dryer per route:")
+    width = max((len(route["id"]) for route in record["routes"]), default=0)
+    lines += [f"  {route['id']:<{width}}  {bed_words(route['dryer'])}" for route in record["routes"]]
+    if record["end_product"] != "gas":
+        lines.append("delivery per route (per-kg figures above are per kg of "
+                     f"{record['end_product'].replace('-', ' ')}):")
+        lines += [f"  {route['id']:<{width}}  {delivery_words(route['delivery'])}"
+                  for route in record["routes"]]
     lines.append("")
     lines.append("weights: " + ", ".join(f"{k}={v:g}" for k, v in record["weights"].items()))
     lines.append("hazard: 1 low, 2 moderate, 3 high; heat: + takes heat in, - gives heat off")
@@ -95,6 +152,13 @@ def comparison_markdown(comparison: Comparison) -> str:
            "| " + " | ".join(head) + " |", "|" + "|".join("---" for _ in head) + "|"]
     out += ["| " + " | ".join(row) + " |" for row in _rows(record)]
     out += ["", "Weights: " + ", ".join(f"{k} {v:g}" for k, v in record["weights"].items()) + ".", ""]
+    out += ["## Dryer and delivery per route", ""]
+    if record["end_product"] != "gas":
+        out += [f"Per-kg figures are per kg of {record['end_product'].replace('-', ' ')}.", ""]
+    out += ["| route | dryer | delivery |", "|---|---|---|"]
+    out += [f"| {route['id']} | {bed_words(route['dryer'])} | {delivery_words(route['delivery'])} |"
+            for route in record["routes"]]
+    out.append("")
     out.append("## Cautions")
     out.append("")
     for text, ids in grouped_warnings(record).items():
@@ -111,20 +175,44 @@ def comparison_markdown(comparison: Comparison) -> str:
 def comparison_csv(comparison: Comparison) -> str:
     """The ranking as CSV, one row per route, SI/JSON keys as the header."""
     record = comparison_record(comparison)
-    keys = [k for k in record["routes"][0] if k not in ("warnings", "cautions")] if record["routes"] else []
+    flat = [_flatten(route) for route in record["routes"]]
+    keys: list[str] = []
+    for route in flat:
+        keys += [k for k in route if k not in keys]
     buffer = io.StringIO()
     writer = csv.writer(buffer, lineterminator="\n")
     writer.writerow(keys)
-    for route in record["routes"]:
-        writer.writerow(["" if route[k] is None else route[k] for k in keys])
+    for route in flat:
+        writer.writerow(["" if route.get(k) is None else route[k] for k in keys])
     return buffer.getvalue()
+
+
+def _flatten(route: Mapping[str, Any]) -> dict[str, Any]:
+    """One route's record with its ``dryer`` and ``delivery`` records as prefixed columns.
+
+    >>> _flatten({"id": "a", "dryer": {"bed_mass_kg": 1.0}, "delivery": None, "warnings": []})
+    {'id': 'a', 'dryer_bed_mass_kg': 1.0}
+    """
+    out: dict[str, Any] = {}
+    for key, value in route.items():
+        if key in ("warnings", "cautions"):
+            continue
+        if isinstance(value, Mapping):
+            out.update({f"{key}_{k}": v for k, v in value.items()})
+        elif value is not None or key not in ("dryer", "delivery"):
+            out[key] = value
+    return out
 
 
 def recipe_markdown(result, currency: str) -> str:
     """One route's batch as a Markdown recipe."""
     rec = batch_record(result, currency)
-    out = [f"# Batch: {rec['label']}", "", f"Delivers {rec['co2_kg']:.3f} kg CO2 "
-           f"({rec['co2_generated_kg']:.3f} kg made).", "", "## Buy and weigh", "",
+    product = rec["end_product"]
+    makes = (f"Delivers {rec['co2_kg']:.3f} kg CO2 ({rec['co2_generated_kg']:.3f} kg made)."
+             if product == "gas" else
+             f"Makes {rec['product_kg']:.3f} kg of {product.replace('-', ' ')} from {rec['co2_kg']:.3f} kg CO2 "
+             f"({rec['co2_generated_kg']:.3f} kg made).")
+    out = [f"# Batch: {rec['label']}", "", makes, "", "## Buy and weigh", "",
            "| reagent | formula | mass kg | volume L | pure kg | cost |", "|---|---|---|---|---|---|"]
     for g in rec["reagents"]:
         out.append(f"| {g['name']} | {g['formula']} | {g['mass_kg']:.3f} | "
@@ -135,8 +223,47 @@ def recipe_markdown(result, currency: str) -> str:
     dt = rec["temperature_change_k"]
     out += ["", "## Heat", "", f"{rec['heat_kj']:+.1f} kJ: {rec['heat_in_words']}"
             + (f", liquor temperature change {dt:+.1f} K." if dt is not None else "."), "",
-            "## Cost", "", f"Per kg CO2: {cell('', '{:.2f}', rec['cost_per_kg'])} {currency}.", ""]
+            "## Dryer", "", bed_words(rec["dryer"]) + "."]
+    if rec["dryer"] is not None:
+        bed = rec["dryer"]
+        regen = bed["regeneration_heat_kj"]
+        out += ["", f"Takes up {bed['water_load_kg_per_cycle']:.4f} kg of water per cycle; pressure "
+                f"drop {bed['pressure_drop_pa']:.3g} Pa; regeneration "
+                + ("none (replace the charge)." if regen is None else f"{regen:.0f} kJ per cycle.")]
+    if rec["delivery"] is not None:
+        out += ["", "## Delivery", "", delivery_words(rec["delivery"]) + "."]
+        if rec["delivery"]["electricity_kwh"] > 0:
+            out.append(f"Compressor electricity {rec['delivery']['electricity_kwh']:.3f} kWh"
+                       + ("." if rec["delivery"]["time_h"] is None
+                          else f", running {rec['delivery']['time_h']:.1f} h."))
+    per = "CO2" if product == "gas" else product.replace("-", " ")
+    out += ["", "## Cost", "", f"Per kg {per}: {cell('', '{:.2f}', rec['cost_per_kg'])} {currency}.", ""]
     out += [f"- {c['item']}: {c['amount']:.3f} {c['unit']} -> {cell('', '{:.2f}', c['cost'])}" for c in rec["costs"]]
     out += ["", "## Cautions", ""] + [f"- {w}" for w in rec["warnings"]] + [f"- {c}" for c in rec["cautions"]]
     out.append(f"- {LOCAL_CODES}")
     return "\n".join(out) + "\n"
+
+
+def recipe_csv(result, currency: str) -> str:
+    """One route's batch as CSV: one row per thing bought or left over, then the cost lines.
+
+    Columns: ``section, name, formula, mass_kg, volume_l, pure_mass_kg, cost`` (cost in the
+    price book's currency; empty where unknown or not applicable).
+    """
+    rec = batch_record(result, currency)
+    buffer = io.StringIO()
+    writer = csv.writer(buffer, lineterminator="\n")
+    writer.writerow(["section", "name", "formula", "mass_kg", "volume_l", "pure_mass_kg", "cost"])
+
+    def blank(value: Any) -> Any:
+        return "" if value is None else value
+
+    for g in rec["reagents"]:
+        writer.writerow(["reagent", g["name"], g["formula"], g["mass_kg"], blank(g["volume_l"]),
+                         g["pure_mass_kg"], blank(g["cost"])])
+    for b in rec["byproducts"]:
+        writer.writerow(["byproduct", b["name"], b["formula"], b["mass_kg"], "", "", ""])
+    for c in rec["costs"]:
+        writer.writerow(["cost", c["item"], "", "", "", "", blank(c["cost"])])
+    writer.writerow(["total", f"per kg ({currency})", "", "", "", "", blank(rec["cost_per_kg"])])
+    return buffer.getvalue()

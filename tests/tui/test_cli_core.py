@@ -49,3 +49,24 @@ def test_help_does_not_import_the_heavy_libraries():
             "print(sorted(m for m in ('CoolProp', 'cantera', 'pint', 'textual') if m in sys.modules))")
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True).stdout
     assert out.strip() == "[]"
+
+
+def test_batch_csv_rows_match_the_json_recipe(capsys):
+    import csv
+    import io
+
+    assert main(["batch", "fermentation", "--json"]) == 0
+    recipe = json.loads(capsys.readouterr().out)
+    assert main(["batch", "fermentation", "--csv"]) == 0
+    rows = list(csv.DictReader(io.StringIO(capsys.readouterr().out)))
+    reagents = [r for r in rows if r["section"] == "reagent"]
+    assert [r["name"] for r in reagents] == [g["name"] for g in recipe["reagents"]]
+    assert float(rows[-1]["cost"]) == pytest.approx(recipe["cost_per_kg"], rel=1e-12)
+
+
+def test_demand_error_names_both_forms(tmp_path, capsys):
+    path = tmp_path / "s.toml"
+    path.write_text('demand = "3 L"\n')
+    assert main(["compare", str(path)]) == 2
+    err = capsys.readouterr().err
+    assert "line 1: demand" in err and "'3 kg'" in err and "kg/day" in err

@@ -15,7 +15,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
     parser.add_argument("--co2", metavar="MASS", help="CO2 to deliver in this batch, e.g. '2 kg' (default: the scenario's)")
     parser.add_argument("--option", action="append", default=[], metavar="KEY=VALUE",
                         help="a route option, e.g. --option strength='20 %%'")
-    parser.add_argument("--markdown", action="store_true", help="print the recipe as Markdown")
+    group = parser.add_mutually_exclusive_group()
+    group.add_argument("--markdown", action="store_true", help="print the recipe as Markdown")
+    group.add_argument("--csv", action="store_true", help="print the recipe as CSV")
 
 
 def run(args: argparse.Namespace) -> dict:
@@ -43,10 +45,42 @@ def run(args: argparse.Namespace) -> dict:
 def render(answer: dict, args: argparse.Namespace) -> str:
     """The recipe as Markdown or the readable table."""
     from tui.output import table_text
-    from tui.report import recipe_markdown
+    from tui.report import recipe_csv, recipe_markdown
 
     if args.markdown:
         return recipe_markdown(args._result, args._currency).rstrip("\n")
-    flat = {k: v for k, v in answer.items() if k not in ("raw_gas_mole_fractions",)}
+    if args.csv:
+        return recipe_csv(args._result, args._currency).rstrip("\n")
+    nested = ("raw_gas_mole_fractions", "dryer", "delivery")
+    flat = {k: v for k, v in answer.items() if k not in nested}
     gas = ", ".join(f"{k} {v:.2%}" for k, v in answer["raw_gas_mole_fractions"].items())
-    return table_text(flat) + f"\n\nraw gas (mole fractions): {gas}"
+    text = table_text(flat) + f"\n\nraw gas (mole fractions): {gas}"
+    delivery = answer.get("delivery")
+    if delivery is not None and delivery["stages"] is None:
+        # bought already condensed or solid: no compression figures to show, rather than unknowns
+        delivery = {k: v for k, v in delivery.items() if v is not None}
+    return text + _section("dryer", answer.get("dryer"), "no dryer") + _section(
+        "delivery", delivery, "none: the end product is the gas as made")
+
+
+def _section(title: str, record: dict | None, empty: str) -> str:
+    """A nested record (the dryer or the delivery) as an indented block of the readable table.
+
+    >>> print(_section("dryer", None, "no dryer"))
+    <BLANKLINE>
+    <BLANKLINE>
+    dryer: no dryer
+    >>> print(_section("dryer", {"bed_mass_kg": 0.5, "outlet_dew_point_k": 203.15}, ""))
+    <BLANKLINE>
+    <BLANKLINE>
+    dryer:
+      bed mass           0.5000 kg
+      outlet dew point   -70.00 °C (203.15 K)
+    """
+    from tui.output import format_value, label_of
+
+    if record is None:
+        return f"\n\n{title}: {empty}"
+    rows = [(label_of(k)[0], format_value(k, v)) for k, v in record.items()]
+    width = max(len(label) for label, _ in rows)
+    return f"\n\n{title}:\n" + "\n".join(f"  {label:<{width}}   {value}" for label, value in rows)

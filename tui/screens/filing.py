@@ -146,9 +146,9 @@ class Filing:
         return json_text(comparison_record(comparison))
 
     def recipe_text(self, fmt: str) -> str:
-        """The chosen route's batch as ``batch --markdown/--json`` prints it."""
+        """The chosen route's batch as ``batch --markdown/--csv/--json`` prints it."""
         from sources.compare import batch_record
-        from tui.report import recipe_markdown
+        from tui.report import recipe_csv, recipe_markdown
 
         row = self.selected_row()
         currency = self.outcome.comparison.currency
@@ -156,14 +156,16 @@ class Filing:
             return recipe_markdown(row.result, currency)
         if fmt == "json":
             return json_text(batch_record(row.result, currency))
-        raise InputError("export", "a batch recipe exports as .md or .json; .csv is for the ranking")
+        if fmt == "csv":
+            return recipe_csv(row.result, currency)
+        raise InputError("export", "a batch recipe exports as .md, .csv or .json")
 
     def action_export_ranking(self) -> None:
         """Export the ranking to a .md, .csv or .json file."""
         self._export_flow("ranking")
 
     def action_export_recipe(self) -> None:
-        """Export the chosen route's batch to a .md or .json file."""
+        """Export the chosen route's batch to a .md, .csv or .json file."""
         self._export_flow("recipe")
 
     @work(exclusive=True, group="files")
@@ -177,7 +179,7 @@ class Filing:
         else:
             suggestion, title = f"{stem}-ranking.md", "Export the ranking"
         name = await self.app.push_screen_wait(PathDialog(title, suggestion, "the ending picks the format: "
-                                                          + (".md or .json" if what == "recipe" else ".md, .csv or .json")))
+                                                          ".md, .csv or .json"))
         if not name:
             return
         try:
