@@ -178,8 +178,69 @@ def row_record(row: RouteRow) -> dict[str, Any]:
         "hazard": r.hazard,
         "hazard_reason": r.hazard_reason,
         "delivers": r.delivers,
+        "product_kg": r.per_kg_basis,
+        "dryer": dryer_record(r.dryer),
+        "delivery": delivery_record(r.delivery),
         "warnings": list(r.warnings),
         "cautions": list(r.cautions),
+    }
+
+
+def dryer_record(bed: Any) -> dict[str, Any] | None:
+    """The sized bed of a route (a :class:`thermo.dryer.DryerResult`) as JSON, ``None`` without one.
+
+    >>> dryer_record(None) is None
+    True
+    """
+    if bed is None:
+        return None
+    heat = bed.regeneration_heat_j
+    return {
+        "desiccant": bed.desiccant,
+        "bed_mass_kg": bed.bed_mass_kg,
+        "bed_volume_l": bed.bed_volume_m3 * 1000.0,
+        "bed_diameter_m": bed.bed_diameter_m,
+        "bed_length_m": bed.bed_length_m,
+        "water_load_kg_per_cycle": bed.water_load_kg_per_cycle,
+        "pressure_drop_pa": bed.pressure_drop_pa,
+        "breakthrough_h": bed.breakthrough_s / 3600.0,
+        "target_ppmv": bed.target_ppmv,
+        "outlet_ppmv": bed.outlet_ppmv,
+        "outlet_dew_point_k": bed.outlet_dew_point_k,
+        "reaches_target": bed.reaches_target,
+        "regeneration_heat_kj": None if heat is None else heat / 1000.0,
+    }
+
+
+def delivery_record(delivery: Any) -> dict[str, Any] | None:
+    """Compression and flash of a route (a :class:`sources.delivery.Delivery`) as JSON.
+
+    ``None`` when the end product is gas. Compression figures are ``None`` when the route hands
+    over CO2 already condensed or solid (bought); ``work_kj_per_kg`` and
+    ``heat_rejected_kj_per_kg`` are per kg of CO2 condensed, as in ``co2routes liquefy``;
+    ``raw_co2_kg_per_kg`` is kg of raw CO2 per kg of end product (flash and purchase losses).
+
+    >>> delivery_record(None) is None
+    True
+    """
+    if delivery is None:
+        return None
+    liq, flash = delivery.liquefaction, delivery.flash
+    timed = liq is not None and liq.mass_flow_kg_s
+    return {
+        "end_product": delivery.end_product,
+        "product_kg": delivery.product_kg,
+        "raw_co2_kg": delivery.raw_co2_kg,
+        "raw_co2_kg_per_kg": delivery.raw_per_product,
+        "condensing_temperature_k": None if liq is None else liq.condensing_temperature_k,
+        "condensing_pressure_pa": None if liq is None else liq.condensing_pressure_pa,
+        "stages": None if liq is None else len(liq.stages),
+        "work_kj_per_kg": None if liq is None else liq.work_j_per_kg / 1000.0,
+        "discharge_temperature_k": None if liq is None else liq.discharge_temperature_k,
+        "heat_rejected_kj_per_kg": None if liq is None else liq.heat_rejected_j_per_kg / 1000.0,
+        "electricity_kwh": delivery.electricity_kwh,
+        "time_h": delivery.time_h if timed else None,
+        "solid_fraction": None if flash is None else flash.solid_fraction,
     }
 
 
@@ -227,6 +288,10 @@ def batch_record(result: RouteResult, currency: str) -> dict[str, Any]:
         "cost_per_kg": result.cost_per_kg,
         "hazard": result.hazard,
         "hazard_reason": result.hazard_reason,
+        "end_product": "gas" if result.delivery is None else result.delivery.end_product,
+        "product_kg": result.per_kg_basis,
+        "dryer": dryer_record(result.dryer),
+        "delivery": delivery_record(result.delivery),
         "notes": list(result.notes),
         "warnings": list(result.warnings),
         "cautions": list(result.cautions),

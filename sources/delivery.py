@@ -94,9 +94,12 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
     if end_product == "dry-ice" and flash is not None:
         notes.append(f"{flash.solid_fraction:.0%} of the liquid becomes dry ice; the rest is vented as gas")
     caution_list = []
-    if end_product in ("liquid", "dry-ice"):
+    # bought dry ice never passes through a cylinder or a flash: only its own caution applies
+    if end_product in ("liquid", "dry-ice") and delivers != "dry-ice":
         caution_list += [cautions.PRESSURE, cautions.CYLINDER_HEAT]
+    if end_product == "dry-ice" and delivers != "dry-ice":
+        caution_list.append(cautions.COLD_LIQUID)
     if end_product == "dry-ice":
-        caution_list += [cautions.COLD_LIQUID, cautions.DRY_ICE]
+        caution_list.append(cautions.DRY_ICE)
     return Delivery(end_product, product_kg, raw_co2_kg, liquefaction, flash, electricity, time_h,
                     tuple(warnings), tuple(caution_list), tuple(notes))
