@@ -74,18 +74,18 @@ class KeysScreen(ModalScreen[None]):
         self.sections = sections + [("From the widgets", list(BUILT_IN))]
 
     def compose(self) -> ComposeResult:
-        table = Table(box=None, show_header=False, pad_edge=False, expand=True)
-        table.add_column("key", style="bold", no_wrap=True, min_width=14)
-        table.add_column("what it does", ratio=1)
-        for title, rows in self.sections:
-            table.add_row(Text(title, style="reverse"), "")
-            for key, what in rows:
-                table.add_row(key, what)
-            table.add_row("", "")
         with VerticalScroll(id="keys-box") as box:
             box.border_title = "Keys  (esc closes)"
             yield Static(Text(ABOUT), id="keys-about")
-            yield Static(table, id="keys-table")
+            for title, rows in self.sections:
+                # a title line of its own, so a long title does not widen the key column
+                yield Static(Text(title, style="reverse"), classes="keys-title")
+                table = Table(box=None, show_header=False, pad_edge=False, expand=True)
+                table.add_column("key", style="bold", no_wrap=True, width=16)
+                table.add_column("what it does", ratio=1)
+                for key, what in rows:
+                    table.add_row(key, what)
+                yield Static(table, classes="keys-table")
 
     def action_close(self) -> None:
         """Back to the planning screen."""

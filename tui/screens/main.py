@@ -40,7 +40,7 @@ class MainScreen(Filing, Working, Screen):
         Binding("ctrl+n", "save_as", "save the scenario under a new name"),
         Binding("ctrl+o", "open", "open a scenario file"),
         Binding("ctrl+t", "export_ranking", "export the ranking (.md .csv .json)"),
-        Binding("ctrl+b", "export_recipe", "export the chosen route's batch (.md .json)"),
+        Binding("ctrl+b", "export_recipe", "export the chosen route's batch (.md .csv .json)"),
         Binding("ctrl+g", "next_pane", "go to the next pane: inputs, ranking, detail"),
         Binding("ctrl+f", "fill", "detail fills the screen (cautions stay); again: back"),
     ] + [Binding(str(i + 1), f"tab({i})", f"detail tab: {title}") for i, (_, title) in enumerate(TABS)]
