@@ -144,6 +144,7 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
     """Every route (default: every route found) for ``scenario``, ranked."""
     cat = catalogue()
     chosen = cat.routes if routes is None else tuple(routes)
+    check_option_tables(scenario, (*cat.routes, *chosen))
     results = []
     failures = list(cat.failures)
     for route in chosen:
@@ -157,6 +158,20 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
             failures.append(f"route {route.id!r} failed: {type(err).__name__}: {err}")
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
                       dict(scenario.weights), rank(results, scenario.weights), tuple(failures))
+
+
+def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:
+    """Refuse an ``[options.ID]`` table of ``scenario`` whose ID is none of ``routes``' ids.
+
+    Without this a mistyped route id would leave that route on its defaults without a word.
+    """
+    from thermo.errors import InputError
+
+    known = {r.id for r in routes}
+    for route_id in scenario.options:
+        if route_id not in known:
+            raise InputError(f"scenario [options.{route_id}]",
+                             f"names no route found; routes are {', '.join(sorted(known))}")
 
 
 def row_record(row: RouteRow) -> dict[str, Any]:

@@ -301,6 +301,22 @@ def test_bad_scenario_names_the_file_the_line_and_the_key(capsys, tmp_path, body
             assert word in err
 
 
+def test_a_mistyped_route_in_an_options_table_is_refused(capsys, tmp_path):
+    # otherwise that route would quietly run on its defaults
+    path = tmp_path / "typo.toml"
+    path.write_text('demand = "1 kg"\n\n[options.acid-carbonat]\nacid = "acetic"\n')
+    for verb in (["compare"], ["batch", "purchase"]):
+        err = _refused(capsys, [*verb, str(path)])
+        assert "[options.acid-carbonat]" in err and "acid-carbonate" in err
+
+
+def test_batch_table_gives_the_cost_in_the_book_currency(capsys):
+    assert main(["batch", "fermentation"]) == 0
+    out = capsys.readouterr().out
+    assert "EUR per kg" in out  # the demo book names its currency once: EUR
+    assert "temperature change  – (not worked out for this route)" in out
+
+
 def test_unknown_flag_is_one_line_with_status_2(capsys):
     with pytest.raises(SystemExit) as exc:
         main(["compare", "--colour"])

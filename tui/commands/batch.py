@@ -22,7 +22,7 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The recipe's JSON record."""
-    from sources.compare import batch_record, evaluate
+    from sources.compare import batch_record, check_option_tables, evaluate
     from sources.registry import catalogue
     from sources.scenario import demo, load
     from thermo.errors import InputError
@@ -30,6 +30,7 @@ def run(args: argparse.Namespace) -> dict:
 
     scenario = demo() if args.scenario is None else load(args.scenario)
     route = catalogue().get(args.route)
+    check_option_tables(scenario, catalogue().routes)
     options = {}
     for item in args.option:
         key, sep, value = item.partition("=")
@@ -53,6 +54,7 @@ def render(answer: dict, args: argparse.Namespace) -> str:
         return recipe_csv(args._result, args._currency).rstrip("\n")
     nested = ("raw_gas_mole_fractions", "dryer", "delivery")
     flat = {k: v for k, v in answer.items() if k not in nested}
+    flat.update(_readable(answer))
     gas = ", ".join(f"{k} {v:.2%}" for k, v in answer["raw_gas_mole_fractions"].items())
     text = table_text(flat) + f"\n\nraw gas (mole fractions): {gas}"
     delivery = answer.get("delivery")
@@ -61,6 +63,25 @@ def render(answer: dict, args: argparse.Namespace) -> str:
         delivery = {k: v for k, v in delivery.items() if v is not None}
     return text + _section("dryer", answer.get("dryer"), "no dryer") + _section(
         "delivery", delivery, "none: the end product is the gas as made")
+
+
+def _readable(answer: dict) -> dict:
+    """Table values that read better as words than as the bare JSON value.
+
+    >>> _readable({"cost_per_kg": 3.948, "currency": "EUR", "temperature_change_k": None})
+    {'cost_per_kg': '3.948 EUR per kg', 'temperature_change_k': '– (not worked out for this route)'}
+    >>> _readable({"cost_per_kg": None, "currency": "EUR", "temperature_change_k": -2.0})
+    {'cost_per_kg': 'unknown: a price is missing from the price book'}
+    """
+    from tui.output import format_value
+
+    out = {}
+    cost = answer.get("cost_per_kg")
+    out["cost_per_kg"] = "unknown: a price is missing from the price book" if cost is None else \
+        format_value("cost_per_kg", cost).replace(" per kg", f" {answer.get('currency', '')} per kg")
+    if answer.get("temperature_change_k", 0.0) is None:
+        out["temperature_change_k"] = "– (not worked out for this route)"
+    return out
 
 
 def _section(title: str, record: dict | None, empty: str) -> str:
