@@ -48,7 +48,11 @@ def run(args: argparse.Namespace) -> dict:
 
     comparison = compare(load_scenario(args))
     args._comparison = comparison
-    return comparison_record(comparison)
+    record = comparison_record(comparison)
+    # the answer's own lists, as every command has: what went wrong, and every route's cautions
+    record.setdefault("warnings", list(comparison.failures))
+    record.setdefault("cautions", list(dict.fromkeys(c for row in comparison.rows for c in row.result.cautions)))
+    return record
 
 
 def render(answer: dict, args: argparse.Namespace) -> str:
