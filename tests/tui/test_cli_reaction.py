@@ -77,6 +77,13 @@ def test_calcination_by_pressure(capsys):
     assert answer["co2_pressure_pa"] == pytest.approx(101325, rel=1e-6)
 
 
+def test_calcination_above_one_atmosphere_carries_the_pressure_caution(capsys):
+    from thermo import cautions
+
+    assert cautions.PRESSURE not in run_json(capsys, "calcination", "--co2-pressure", "0.5 atm")["cautions"]
+    assert cautions.PRESSURE in run_json(capsys, "calcination", "--co2-pressure", "1.5 atm")["cautions"]
+
+
 @pytest.mark.parametrize("argv", [
     ["calcination"],
     ["calcination", "--temperature", "900 degC", "--co2-pressure", "1 atm"],

@@ -32,10 +32,13 @@ def run(args: argparse.Namespace) -> dict:
         "Equilibrium for pure calcite: kilns run hotter than this to calcine at a useful rate "
         "(common practice)."
     ]
+    said = [cautions.HOT_SURFACE, cautions.LIME_DUST, cautions.ASPHYXIATION]
+    if point.co2_pressure_pa > 101325.0:  # a closed retort above 1 atm is a pressure vessel
+        said.append(cautions.PRESSURE)
     return {
         "temperature_k": point.temperature_k,
         "co2_pressure_pa": point.co2_pressure_pa,
         "delta_h_kj_per_mol": point.delta_h_j_per_mol / 1000.0,
         "warnings": warnings,
-        "cautions": [cautions.HOT_SURFACE, cautions.LIME_DUST, cautions.ASPHYXIATION],
+        "cautions": said,
     }
