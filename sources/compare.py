@@ -268,6 +268,9 @@ def comparison_record(comparison: Comparison) -> dict[str, Any]:
         "weights": dict(comparison.weights),
         "routes": [row_record(row) for row in comparison.rows],
         "failures": list(comparison.failures),
+        # the answer's own lists, as every command has: what went wrong, every route's cautions
+        "warnings": list(comparison.failures),
+        "cautions": list(dict.fromkeys(c for row in comparison.rows for c in row.result.cautions)),
     }
 
 

@@ -48,11 +48,7 @@ def run(args: argparse.Namespace) -> dict:
 
     comparison = compare(load_scenario(args))
     args._comparison = comparison
-    record = comparison_record(comparison)
-    # the answer's own lists, as every command has: what went wrong, and every route's cautions
-    record.setdefault("warnings", list(comparison.failures))
-    record.setdefault("cautions", list(dict.fromkeys(c for row in comparison.rows for c in row.result.cautions)))
-    return record
+    return comparison_record(comparison)
 
 
 def render(answer: dict, args: argparse.Namespace) -> str:
