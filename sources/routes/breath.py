@@ -14,7 +14,7 @@ from sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteR
 from sources.common import water_g_per_kg_co2
 from sources.routes.shared import R, kwh, percent, saturated
 from sources.routes.sorbent_calcination import (BED_OPTIONS, KILN_HOURS, M_H2O, RELEASE_OPTIONS, kiln_gas,
-                                                load_bed, release, release_notes)
+                                                load_bed, release, release_notes, spent_lime)
 from thermo import cautions
 from thermo.co2 import MOLAR_MASS as M_CO2
 
@@ -145,6 +145,7 @@ class BreathRoute:
         byproducts = [Byproduct("breath condensate", "H2O", line_condensate, "drained from the collector line")]
         if kiln_condensate > 0:
             byproducts.append(Byproduct("kiln condensate", "H2O", kiln_condensate, "clean water from the kiln gas"))
+        byproducts.append(spent_lime(rel, int(opt["cycles"])))
         return RouteResult(
             route_id=self.id, label=self.label, co2_kg=request.co2_kg,
             co2_generated_kg=exhaled_mol * M_CO2,

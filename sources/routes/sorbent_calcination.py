@@ -174,6 +174,18 @@ def release(co2_mol: float, site: Site, opt) -> Release:
                    water_kg, (reagent,), tuple(uses), energy, tuple(warnings))
 
 
+def spent_lime(rel: Release, cycles: int) -> Byproduct:
+    """The sintered sorbent retired each batch: as much calcium as the make-up brings in [kg].
+
+    In a steady campaign the bed keeps its size, so the make-up bought per batch (n_Ca / N)
+    leaves again as spent sorbent, in the form it was bought (slaked again, or quicklime).
+    """
+    bought = rel.reagents[0]
+    return Byproduct("spent lime", bought.formula, bought.mass_kg,
+                     f"sintered sorbent retired after {cycles} cycles, in place of the make-up; caustic "
+                     "until it has taken up CO2 from the air: spread on soil or landfill as local rules allow")
+
+
 def kiln_gas(rel: Release, co2_mol: float, site: Site) -> tuple[dict[str, float], float]:
     """The kiln's gas cooled to the site (saturated mole fractions) and the condensate [kg]."""
     raw = saturated({"CO2": 1.0}, site.temperature_k, site.pressure_pa)
@@ -228,8 +240,8 @@ class SorbentCalcinationRoute:
         return RouteResult(
             route_id=self.id, label=self.label, co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
             reagents=rel.reagents,
-            byproducts=(Byproduct("kiln condensate", "H2O", condensate, "clean water from the kiln gas"),)
-            if condensate > 0 else (),
+            byproducts=((Byproduct("kiln condensate", "H2O", condensate, "clean water from the kiln gas"),)
+                        if condensate > 0 else ()) + (spent_lime(rel, int(opt["cycles"])),),
             uses=rel.uses + (Use("electricity for the fan", fan_kwh, "energy_kwh", "electricity"),),
             raw_gas=RawGas(raw, site.temperature_k, site.pressure_pa),
             heat_kj=rel.kiln_heat_j / 1000.0,
