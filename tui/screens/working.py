@@ -35,12 +35,6 @@ class Working:
 
         worker = get_current_worker()
         self.app.call_from_thread(self._busy, generation)
-        if not self._extras:
-            self._extras = True
-            try:
-                self._load_extras()
-            except Exception as err:  # noqa: BLE001 - a broken price book or route must not stop the form
-                self.app.call_from_thread(self._say, f"could not list options and prices: {err}", True)
         text = self.opened.text if document == self.opened.document else None
 
         def proceed() -> bool:
@@ -60,8 +54,23 @@ class Working:
             if not worker.is_cancelled:
                 self.app.call_from_thread(self._failed, generation, err)
             return
-        if not worker.is_cancelled:
-            self.app.call_from_thread(self._computed, generation, result)
+        else:
+            if not worker.is_cancelled:
+                self.app.call_from_thread(self._computed, generation, result)
+        finally:
+            # after the first answer (good or refused) is on screen
+            self._extras_once()
+
+    def _extras_once(self) -> None:
+        """Add the route-option and price fields to the form, once, after the first ranking is on
+        screen (mounting them takes longer than the ranking itself)."""
+        if self._extras:
+            return
+        self._extras = True
+        try:
+            self._load_extras()
+        except Exception as err:  # noqa: BLE001 - a broken price book or route must not stop the form
+            self.app.call_from_thread(self._say, f"could not list options and prices: {err}", True)
 
     def _load_extras(self) -> None:
         from sources.prices import load_book
