@@ -17,6 +17,7 @@ from typing import Any
 
 from sources.base import Site
 from thermo import cautions
+from thermo.errors import InputError
 
 #: Electric motor efficiency of a small compressor drive (common practice for fractional to
 #: few-kW induction motors: 0.75-0.90; IEC 60034-30-1 IE2/IE3 classes sit near 0.80-0.85 at 1 kW).
@@ -62,6 +63,19 @@ def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, sit
     return product_kg * raw_per_dry_ice(flash.solid_fraction).kg_raw_per_kg, flash
 
 
+#: thermo.compression's field names -> the scenario keys they come from.
+_PLAN_FIELDS = {
+    "condensing temperature": "delivery.condensing_temperature",
+    "stages": "delivery.stages",
+    "efficiency": "delivery.efficiency",
+    "intercool temperature": "delivery.intercool_temperature",
+    "displacement": "delivery.displacement",
+    "volumetric efficiency": "delivery.volumetric_efficiency",
+    "inlet pressure": "site.pressure",
+    "inlet temperature": "site.temperature",
+}
+
+
 @lru_cache(maxsize=64)
 def _liquefy(pressure_pa: float, temperature_k: float, plan):
     """Compression per kg from the site's state under ``plan`` (the same for every route, so
@@ -86,7 +100,14 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
     time_h = 0.0
     if end_product in ("liquid", "dry-ice") and delivers in ("raw-gas", "gas") and not (
             delivers == "gas" and end_product == "dry-ice"):
-        liquefaction = _liquefy(site.pressure_pa, site.temperature_k, plan)
+        try:
+            liquefaction = _liquefy(site.pressure_pa, site.temperature_k, plan)
+        except InputError as err:
+            # name the scenario's own key, as the scenario's other errors do
+            field = _PLAN_FIELDS.get(err.field)
+            if field is None:
+                raise
+            raise InputError(field, err.allowed, got=err.got) from None
         electricity = liquefaction.work_j_per_kg * raw_co2_kg / MOTOR_EFFICIENCY / 3.6e6
         if liquefaction.mass_flow_kg_s:
             time_h = raw_co2_kg / liquefaction.mass_flow_kg_s / 3600.0
