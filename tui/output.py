@@ -65,6 +65,8 @@ def format_value(key: str, value: Any) -> str:
     '64.34 bar (933.2 psi)'
     >>> format_value("temperature_k", 298.15)
     '25.00 °C (298.15 K)'
+    >>> format_value("pressure_drop_pa", 838.8)
+    '838.8 Pa (0.1217 psi)'
     >>> format_value("cost_per_kg", None)
     'unknown'
     >>> format_value("temperature_change_k", -14.27)
@@ -79,6 +81,8 @@ def format_value(key: str, value: Any) -> str:
             if key.endswith(suffix):
                 unit, factor, offset = _SUFFIXES[suffix]
                 shown = value * factor + offset
+                if suffix == "_pa" and abs(value) < 1e4:  # small drops read best in Pa
+                    return f"{_num(value)} Pa ({_num(value / 6894.757293168361)} psi)"
                 if suffix == "_pa":
                     return f"{_num(shown)} bar ({_num(value / 6894.757293168361)} psi)"
                 if suffix == "_k" and _is_difference(key):

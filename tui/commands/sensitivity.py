@@ -51,7 +51,17 @@ def run(args: argparse.Namespace) -> dict:
     if top < 1:
         raise InputError("--top", "must be a whole number of at least 1", got=args.top)
     scenario, spreads, routes = whatif_inputs(args)
-    return sensitivity_record(sensitivity(scenario, spreads, routes))
+    return {"end_product": scenario.end_product,
+            **sensitivity_record(sensitivity(scenario, spreads, routes))}
+
+
+def per_kg_words(answer: dict) -> str:
+    """What the costs are per kg of: CO2 gas, liquid CO2 or dry ice (the scenario's end product).
+
+    >>> per_kg_words({"end_product": "dry-ice"}), per_kg_words({})
+    ('dry ice', 'CO2')
+    """
+    return {"liquid": "liquid CO2", "dry-ice": "dry ice"}.get(answer.get("end_product", "gas"), "CO2")
 
 
 def render(answer: dict, args: argparse.Namespace) -> str:
@@ -60,7 +70,7 @@ def render(answer: dict, args: argparse.Namespace) -> str:
 
     top = int(args.top)
     cur = answer["currency"]
-    lines = [f"{answer['scenario']}: cost per kg CO2 in {cur}, one input at a time"]
+    lines = [f"{answer['scenario']}: cost per kg {per_kg_words(answer)} in {cur}, one input at a time"]
     for route in answer["routes"]:
         lines.append("")
         nominal = route["cost_per_kg"]

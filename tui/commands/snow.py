@@ -8,6 +8,16 @@ NAME = "snow"
 HELP = "dry-ice (snow) fraction of saturated liquid CO2 released to 1 atm"
 
 
+def _draw(text: str) -> str:
+    """``--draw`` as typed, with the British spelling taken for the American one.
+
+    >>> _draw("Vapour"), _draw("liquid")
+    ('vapor', 'liquid')
+    """
+    word = text.strip().lower()
+    return "vapor" if word == "vapour" else word
+
+
 def add_arguments(parser: argparse.ArgumentParser) -> None:
     """Options of ``snow``."""
     group = parser.add_mutually_exclusive_group(required=True)
@@ -16,9 +26,10 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
     group.add_argument("--liquid-pressure", metavar="P",
                        help="pressure of the saturated liquid, e.g. '57 bar' (5.18 to 73.77 bar)")
     parser.add_argument("--liquid-mass", metavar="M", help="liquid released, e.g. '10 kg'")
-    parser.add_argument("--draw", choices=("liquid", "vapor"), default="liquid",
+    parser.add_argument("--draw", choices=("liquid", "vapor"), default="liquid", type=_draw,
                         help="take CO2 from the liquid side (dip tube or inverted cylinder, the "
-                             "default) or the vapour side (top of an upright cylinder)")
+                             "default) or the vapour side (top of an upright cylinder; 'vapour' "
+                             "is accepted too)")
     parser.add_argument("--transfer-loss", metavar="F", default="0 %",
                         help="share of the raw CO2 lost before the flash (purges, hoses, the heel "
                              "left in the cylinder), e.g. '5 %%'; for raw CO2 per kg of dry ice")

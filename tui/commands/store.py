@@ -81,7 +81,8 @@ def run(args: argparse.Namespace) -> dict:
     warnings = list(state.warnings)
     if args.mass is not None:
         warnings.extend(_charge_check(state, args.force))
-    if state.fill_density_kg_l > FILLING_DENSITY_LIMIT_KG_L:
+    if state.fill_density_kg_l > FILLING_DENSITY_LIMIT_KG_L and not any(
+            "filling ratio" in w for w in warnings):  # a forced charge has said it already
         warnings.append(
             f"Fill density {state.fill_density_kg_l:.3f} kg/L is above 0.68 kg/L, the filling density "
             "for the common class of high-pressure CO2 cylinders (49 CFR 173.304a).")

@@ -3,6 +3,7 @@
 from __future__ import annotations
 
 import argparse
+import math
 import sys
 
 NAME = "uncertainty"
@@ -78,30 +79,32 @@ def run(args: argparse.Namespace) -> dict:
     finally:
         bar.close()
     args._result = result
-    return uncertainty_record(result)
+    return {"end_product": scenario.end_product, **uncertainty_record(result)}
 
 
 def render(answer: dict, args: argparse.Namespace) -> str:
     """A table of the percentiles with a text box chart (P10 .. P90 box, P50 mark) per route."""
     from thermo.cautions import LOCAL_CODES
+    from tui.commands.sensitivity import per_kg_words
 
     cur = answer["currency"]
     rows = [r for r in answer["routes"] if r["cost_per_kg_p50"] is not None]
-    lines = [f"{answer['scenario']}: cost per kg CO2 in {cur}, {answer['samples']} samples, seed {answer['seed']}",
+    lines = [f"{answer['scenario']}: cost per kg {per_kg_words(answer)} in {cur}, {answer['samples']} samples, "
+             f"seed {answer['seed']}",
              "inputs drawn: " + (", ".join(f"{i['name']} ({i['dist']})" for i in answer["inputs"]) or "none"), ""]
     lo = min((r["cost_per_kg_p10"] for r in rows), default=0.0)
     hi = max((r["cost_per_kg_p90"] for r in rows), default=1.0)
-    span = (hi - lo) or 1.0
     width = 30
+    scale = _scale(lo, hi, width)
     idw = max((len(r["id"]) for r in answer["routes"]), default=5)
     lines.append(f"{'route':<{idw}}  {'nominal':>8} {'P10':>8} {'P50':>8} {'P90':>8} {'cheapest':>8}  "
-                 f"{lo:<.2f}{'':^{width - 8}}{hi:>.2f}")
+                 f"{lo:<.2f}{'(log scale)' if scale.log else '':^{width - 8}}{hi:>.2f}")
     for r in answer["routes"]:
         if r["cost_per_kg_p50"] is None:
             lines.append(f"{r['id']:<{idw}}  cost unknown (a price is missing)")
             continue
         chart = [" "] * (width + 1)
-        a, m, b = (round((r[k] - lo) / span * width) for k in ("cost_per_kg_p10", "cost_per_kg_p50", "cost_per_kg_p90"))
+        a, m, b = (scale(r[k]) for k in ("cost_per_kg_p10", "cost_per_kg_p50", "cost_per_kg_p90"))
         for k in range(a, b + 1):
             chart[k] = "="
         chart[a], chart[b], chart[m] = "[", "]", "|"
@@ -113,3 +116,28 @@ def render(answer: dict, args: argparse.Namespace) -> str:
     lines += [f"note: {f}" for f in answer["failures"]]
     lines += [f"caution: {c}" for c in answer["cautions"]] + [f"caution: {LOCAL_CODES}"]
     return "\n".join(lines)
+
+
+class _Scale:
+    """Column of a cost on the box chart: linear, or logarithmic when the costs span more than
+    ten times (one expensive route would otherwise squash every other box into a column or two)."""
+
+    def __init__(self, low: float, high: float, width: int) -> None:
+        self.low, self.high, self.width = low, high, width
+        self.log = low > 0 and high / low > 10.0
+
+    def __call__(self, value: float) -> int:
+        if self.log:
+            share = math.log(value / self.low) / math.log(self.high / self.low)
+        else:
+            share = (value - self.low) / ((self.high - self.low) or 1.0)
+        return min(self.width, max(0, round(share * self.width)))
+
+
+def _scale(low: float, high: float, width: int) -> _Scale:
+    """The chart's scale for costs from ``low`` to ``high`` over ``width`` columns.
+
+    >>> _scale(1.0, 2.0, 30)(1.5), _scale(1.0, 100.0, 30)(10.0), _scale(1.0, 100.0, 30).log
+    (15, 15, True)
+    """
+    return _Scale(low, high, width)
