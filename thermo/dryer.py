@@ -312,6 +312,17 @@ def size_dryer(inp: DryerInput) -> DryerResult:
         length += (cycle - t_b) * v_front
         t_b = cycle
     t_s = length / v_front
+    if not reaches:
+        # a bed sized to the front's 5 % edge passes more than the floor well before then when the
+        # front is wide (a near-linear isotherm): say what leaves at the end of the cycle
+        t_of = [t_s + v / k for v in kt]
+        x_end = 0.0 if cycle <= t_of[0] else (1.0 if cycle >= t_of[-1] else interpolate(cycle, t_of, xs))
+        y_end = y_out + x_end * (y_in - y_out)
+        if y_end > 1.5 * y_out:
+            warnings.append(f"By the end of the {cycle / 3600.0:.3g} h cycle the outlet carries about "
+                            f"{y_end * 1e6:.3g} ppmv (dew point {water.dew_point(y_end * p) - 273.15:.0f} "
+                            f"degC): {d.id}'s front is wider than the bed, so its floor of "
+                            f"{y_out * 1e6:.3g} ppmv is not what this bed delivers.")
     if velocity > v_limit:
         warnings.append(f"Superficial velocity {velocity:.3g} m/s is above the {v_limit:.3g} m/s "
                         "at which the bed's pressure gradient reaches 0.33 psi/ft (GPSA design "
