@@ -292,7 +292,7 @@ def batch_record(result: RouteResult, currency: str) -> dict[str, Any]:
             for b in result.byproducts
         ],
         "heat_kj": result.heat_kj,
-        "heat_in_words": heat_words(result.heat_kj),
+        "heat_in_words": heat_words(result.heat_kj, result.temperature_change_k is not None),
         "temperature_change_k": result.temperature_change_k,
         "raw_gas_mole_fractions": dict(result.raw_gas.mole_fractions),
         "water_g_per_kg_co2": result.water_g_per_kg_co2,
@@ -323,16 +323,20 @@ def _cost_of(result: RouteResult, name: str) -> float | None:
     return None
 
 
-def heat_words(heat_kj: float) -> str:
-    """The heat sign said in words.
+def heat_words(heat_kj: float, liquor: bool = True) -> str:
+    """The heat sign said in words; ``liquor`` says whether the heat lands in a batch liquor
+    (acid on carbonate, a reaction in solution) or must be supplied or carried away (a kiln, a
+    burner, a fermenter over days).
 
     >>> heat_words(12.0)
     'takes heat in (the batch cools)'
     >>> heat_words(-3.0)
     'gives heat off (the batch warms)'
+    >>> heat_words(500.0, liquor=False)
+    'takes heat in (it must be supplied)'
     """
+    if abs(heat_kj) < 0.05:
+        return "neither takes in nor gives off noticeable heat"
     if heat_kj > 0:
-        return "takes heat in (the batch cools)"
-    if heat_kj < 0:
-        return "gives heat off (the batch warms)"
-    return "neither takes in nor gives off heat"
+        return "takes heat in (the batch cools)" if liquor else "takes heat in (it must be supplied)"
+    return "gives heat off (the batch warms)" if liquor else "gives heat off (to be carried away)"

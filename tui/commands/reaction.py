@@ -19,23 +19,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
                         help="temperature of reactants and products, e.g. '20 degC' (default 25 degC)")
 
 
-def heat_in_words(delta_h_kj_per_mol: float) -> str:
-    """Say what the sign of the reaction heat means for the batch.
-
-    >>> heat_in_words(31.4)
-    'takes heat in (the batch cools)'
-    >>> heat_in_words(-28.8)
-    'gives heat off (the batch warms)'
-    """
-    if abs(delta_h_kj_per_mol) < 0.05:
-        return "neither takes in nor gives off noticeable heat"
-    if delta_h_kj_per_mol > 0:
-        return "takes heat in (the batch cools)"
-    return "gives heat off (the batch warms)"
-
-
 def run(args: argparse.Namespace) -> dict:
     """The reaction's JSON answer."""
+    from sources.compare import heat_words
     from thermo import cautions
     from thermo.reaction import parse_reaction, reaction_enthalpy
     from thermo.units import parse
@@ -55,7 +41,7 @@ def run(args: argparse.Namespace) -> dict:
         "delta_h_kj_per_mol": result.delta_h_kj_per_mol,
         "delta_h_kj_per_kg_co2": result.delta_h_kj_per_kg_co2,
         "balanced": result.balanced,
-        "heat_in_words": heat_in_words(result.delta_h_kj_per_mol),
+        "heat_in_words": heat_words(result.delta_h_kj_per_mol),
         "warnings": warnings,
         "cautions": _cautions(names, cautions),
     }
