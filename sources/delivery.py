@@ -52,15 +52,38 @@ def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, sit
     >>> raw_co2_needed(2.0, "gas", "raw-gas", DeliveryPlan(), Site())
     (2.0, None)
     """
-    if end_product != "dry-ice" or delivers == "dry-ice":
+    if end_product != "dry-ice":
         return product_kg, None
+    made_kg = product_kg + storage_loss_kg(plan, site)
+    if delivers == "dry-ice":
+        return made_kg, None
     from thermo.dryice import draw_yield, raw_per_dry_ice
 
     # bought gas comes as a liquid cylinder at the site's temperature; made gas is condensed at
     # the condensing temperature; either way the liquid is drawn from the bottom (dip tube)
     temperature = site.temperature_k if delivers in ("gas", "liquid") else plan.condensing_temperature_k
     flash = draw_yield(min(temperature, 303.0), draw="liquid")
-    return product_kg * raw_per_dry_ice(flash.solid_fraction).kg_raw_per_kg, flash
+    return made_kg * raw_per_dry_ice(flash.solid_fraction).kg_raw_per_kg, flash
+
+
+def storage_loss_kg(plan, site: Site) -> float:
+    """Dry ice that sublimes in the insulated box between making (or delivery) and use [kg].
+
+    m = U A (T_site - 194.7 K) t / dH_sub (:func:`thermo.dryice.storage_loss`); zero when the
+    scenario holds the dry ice for no time.
+
+    >>> from sources.scenario import DeliveryPlan
+    >>> storage_loss_kg(DeliveryPlan(), Site())
+    0.0
+    >>> round(storage_loss_kg(DeliveryPlan(hold_time_s=86400.0), Site(temperature_k=293.15)), 2)
+    6.23
+    """
+    if plan.hold_time_s <= 0.0:
+        return 0.0
+    from thermo.dryice import storage_loss
+
+    loss = storage_loss(plan.box_area_m2, plan.box_u_w_m2_k, site.temperature_k)
+    return loss.loss_rate_kg_s * plan.hold_time_s
 
 
 #: thermo.compression's field names -> the scenario keys they come from.
@@ -114,6 +137,11 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
         warnings.extend(liquefaction.warnings)
     if end_product == "dry-ice" and flash is not None:
         notes.append(f"{flash.solid_fraction:.0%} of the liquid becomes dry ice; the rest is vented as gas")
+    if end_product == "dry-ice" and plan.hold_time_s > 0:
+        lost = storage_loss_kg(plan, site)
+        notes.append(f"{lost:.2f} kg of dry ice sublimes in the box over {plan.hold_time_s / 3600:.0f} h "
+                     f"before use ({plan.box_area_m2:g} m2 at U = {plan.box_u_w_m2_k:g} W/(m2 K)); "
+                     "it is made on top of the demand")
     caution_list = []
     # bought dry ice never passes through a cylinder or a flash: only its own caution applies
     if end_product in ("liquid", "dry-ice") and delivers != "dry-ice":

@@ -16,7 +16,7 @@ Schema (every quantity a string with units)::
     [site]      temperature, pressure, air_co2
     [dryer]     desiccant, target_dew_point | target_ppmv, cycle
     [delivery]  condensing_temperature, stages, efficiency, volumetric_efficiency,
-                displacement, intercool_temperature
+                displacement, intercool_temperature; for dry ice hold_time, box_area, box_u
     [weights]   cost, energy, time, heat, water, purity, hazard (numbers >= 0)
     [options.ROUTE-ID]  KEY = "VALUE" for that route's options
     [prices]    KEY = "AMOUNT / UNIT" overriding the price book
@@ -50,7 +50,7 @@ _SECTION_KEYS = {
     "site": {"temperature", "pressure", "air_co2"},
     "dryer": {"desiccant", "target_dew_point", "target_ppmv", "cycle"},
     "delivery": {"condensing_temperature", "stages", "efficiency", "displacement",
-                 "intercool_temperature", "volumetric_efficiency"},
+                 "intercool_temperature", "volumetric_efficiency", "hold_time", "box_area", "box_u"},
 }
 
 
@@ -75,6 +75,12 @@ class DeliveryPlan:
     displacement_m3_s: float | None = None
     intercool_temperature_k: float | None = None
     volumetric_efficiency: float = 0.80
+    #: dry ice: hours held in an insulated box before use [s], the box's outside area [m2] and
+    #: its heat-transfer coefficient [W/(m2 K)]: 5 cm of expanded polystyrene (k about
+    #: 0.035 W/(m K), common practice) gives about 0.7 W/(m2 K)
+    hold_time_s: float = 0.0
+    box_area_m2: float = 0.6
+    box_u_w_m2_k: float = 0.7
 
 
 @dataclass(frozen=True, slots=True)
@@ -196,6 +202,9 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
     for key, value in (("efficiency", efficiency), ("volumetric_efficiency", volumetric)):
         if value > 1.0:
             raise InputError(where("delivery", key), "must be in (0, 100 %]", got=delivery_section.get(key))
+    hold = q("delivery", "hold_time", "time", "0 h")
+    if hold < 0:
+        raise InputError(where("delivery", "hold_time"), "must be 0 or more", got=delivery_section.get("hold_time"))
     delivery = DeliveryPlan(
         condensing_temperature_k=q("delivery", "condensing_temperature", "temperature", "0 degC", positive=True),
         stages=stages_raw,
@@ -203,6 +212,9 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
         displacement_m3_s=q("delivery", "displacement", "volume_flow", positive=True),
         intercool_temperature_k=q("delivery", "intercool_temperature", "temperature", positive=True),
         volumetric_efficiency=volumetric,
+        hold_time_s=hold,
+        box_area_m2=q("delivery", "box_area", "area", "0.6 m**2", positive=True),
+        box_u_w_m2_k=q("delivery", "box_u", "heat_transfer_coefficient", "0.7 W/m**2/K", positive=True),
     )
     weights = dict(DEFAULT_WEIGHTS)
     for key, value in sections["weights"].items():

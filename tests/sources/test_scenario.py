@@ -85,3 +85,22 @@ def test_read_only_folder_is_an_input_error(tmp_path):
             sc.write_atomic(folder / "s.toml", "x")
     finally:
         folder.chmod(0o700)
+
+
+def test_dry_ice_hold_time_adds_the_box_loss_to_what_is_made():
+    from sources.compare import evaluate
+    from sources.registry import catalogue
+
+    base = sc.validate({"demand": "3 kg", "end_product": "dry-ice", "site": {"temperature": "20 degC"}})
+    held = sc.validate({"demand": "3 kg", "end_product": "dry-ice", "site": {"temperature": "20 degC"},
+                        "delivery": {"hold_time": "24 h", "box_area": "0.6 m**2", "box_u": "0.7 W/m**2/K"}})
+    route = catalogue().get("fermentation")
+    a, b = evaluate(route, base), evaluate(route, held)
+    # hand calculation: U A (T - 194.686 K) t / 573.3 kJ/kg (Giauque & Egan 1937 enthalpy of
+    # sublimation) = 0.7 * 0.6 * 98.464 * 86400 / 573300 = 6.232 kg more dry ice made
+    extra = 0.7 * 0.6 * (293.15 - 194.686) * 86400 / 573.3e3
+    assert b.co2_kg / a.co2_kg == pytest.approx((3.0 + extra) / 3.0, rel=1e-9)
+    assert b.product_kg == a.product_kg == 3.0
+    assert b.cost_per_kg > a.cost_per_kg
+    with pytest.raises(InputError):
+        sc.validate({"demand": "3 kg", "delivery": {"hold_time": "-1 h"}})
