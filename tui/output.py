@@ -73,6 +73,8 @@ def format_value(key: str, value: Any) -> str:
     '-14.27 K'
     """
     if value is None:
+        if key.endswith(("_reached_k", "_reached_temperature_k")):
+            return "not reached"
         return "–" if key == "volume_l" else "unknown"
     if isinstance(value, bool):
         return "yes" if value else "no"

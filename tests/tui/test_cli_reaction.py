@@ -50,8 +50,8 @@ def test_reaction_table_output(capsys):
     (["reaction", NAHCO3_HCL, "--temperature", "25"], "--temperature"),
     (["reaction", NAHCO3_HCL, "--temperature", "3 bar"], "--temperature"),
     (["reaction", NAHCO3_HCL, "--temperature", "150 degC"], "temperature"),
-    (["calcination", "--temperature", "2000 degC"], "temperature"),
-    (["calcination", "--co2-pressure", "50 bar"], "co2 pressure"),
+    (["calcination", "--temperature", "2000 degC"], "--temperature"),
+    (["calcination", "--co2-pressure", "50 bar"], "--co2-pressure"),
     (["calcination", "--co2-pressure", "1 kg"], "--co2-pressure"),
 ])
 def test_bad_input_is_one_line_and_exit_2(capsys, argv, part):

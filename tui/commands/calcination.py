@@ -23,11 +23,15 @@ def run(args: argparse.Namespace) -> dict:
     from thermo.calcination import calcination_temperature, co2_pressure_over_calcite
     from thermo.units import parse, parse_positive
 
+    from tui.commands._options import for_option
+
     if args.temperature is not None:
-        point = co2_pressure_over_calcite(parse(args.temperature, "--temperature", "temperature"))
+        with for_option("--temperature"):
+            point = co2_pressure_over_calcite(parse(args.temperature, "--temperature", "temperature"))
     else:
-        point = calcination_temperature(parse_positive(args.co2_pressure, "--co2-pressure",
-                                                       "pressure"))
+        with for_option("--co2-pressure"):
+            point = calcination_temperature(parse_positive(args.co2_pressure, "--co2-pressure",
+                                                           "pressure"))
     warnings = [
         "Equilibrium for pure calcite: kilns run hotter than this to calcine at a useful rate "
         "(common practice)."
