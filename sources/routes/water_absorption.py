@@ -127,6 +127,9 @@ class WaterAbsorptionRoute:
             f"{kwh(vacuum_j) / request.co2_kg:.3g}); heat {kwh(warm_j) / request.co2_kg:.3g} kWh per kg.",
             f"Release at {t_rel - 273.15:.0f} degC and {p_rel / 1000:.3g} kPa sets free {percent(frac)} of the "
             f"dissolved CO2.",
+            f"Absorbing warms the water by {temperature_change(absorb_j / 1000.0, water_kg, WATER_CP):+.2g} K and "
+            f"releasing (gas and water vapour leaving) changes it by "
+            f"{temperature_change(desorb_j / 1000.0, water_kg, WATER_CP):+.2g} K: spread over so much water both are tiny.",
         )
         return RouteResult(
             route_id=self.id, label=self.label, co2_kg=request.co2_kg,
@@ -134,7 +137,9 @@ class WaterAbsorptionRoute:
             reagents=(), byproducts=byproducts, uses=tuple(uses),
             raw_gas=RawGas(raw, t, p),
             heat_kj=(desorb_j + warm_j) / 1000.0,
-            temperature_change_k=temperature_change(absorb_j / 1000.0, water_kg, WATER_CP),
+            # the release step's heat (gas and vapour leaving the water) spread over the water
+            # released, so the sign agrees with heat_kj; absorption's warming is in the notes
+            temperature_change_k=temperature_change(desorb_j / 1000.0, water_kg, WATER_CP),
             water_g_per_kg_co2=water_g_per_kg_co2(raw),
             energy=Energy(electricity_kwh=elec_kwh, heat_kwh=kwh(warm_j)),
             time_h=water_m3 / float(opt["water_flow"]) / 3600.0,

@@ -46,9 +46,9 @@ def test_flue_gas_is_far_better_than_air():
 
 def test_heat_sign():
     # Releasing dissolved gas takes heat in (dH_sol of CO2 -19.95 kJ/mol, Sander 2015 2400 K);
-    # warming takes more; the absorber warms a little
+    # warming takes more; the release cools the water a little (the sign agrees with heat_kj)
     r = run()
-    assert r.heat_kj > 0 and r.temperature_change_k > 0
+    assert r.heat_kj > 0 and r.temperature_change_k < 0
     assert run(release="warming").heat_kj > r.heat_kj
 
 
