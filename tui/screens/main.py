@@ -18,10 +18,11 @@ from textual.app import ComposeResult
 from textual.binding import Binding
 from textual.containers import Horizontal, Vertical
 from textual.screen import Screen
-from textual.widgets import Input, ProgressBar, Static
+from textual.widgets import Input, ProgressBar, Static, TabbedContent
 
 from tui.fields import BASE_FIELDS, Field, match_field, price_value
 from tui.screens.filing import Filing
+from tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES, WhatIf
 from tui.screens.working import Working
 from tui.session import Opened, edited, value_at
 from tui.widgets.detail import TABS, CautionPanel, RouteDetail
@@ -29,7 +30,7 @@ from tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
 from tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
 
 
-class MainScreen(Filing, Working, Screen):
+class MainScreen(Filing, Working, WhatIf, Screen):
     """The one working screen."""
 
     CSS_PATH = "main.tcss"
@@ -43,6 +44,8 @@ class MainScreen(Filing, Working, Screen):
         Binding("ctrl+b", "export_recipe", "export the chosen route's batch (.md .csv .json)"),
         Binding("ctrl+g", "next_pane", "go to the next pane: inputs, ranking, detail"),
         Binding("ctrl+f", "fill", "detail fills the screen (cautions stay); again: back"),
+        Binding(SPREAD_KEY, "draw_samples", f"draw {SPREAD_SAMPLES} samples of the uncertain inputs: every "
+                "route's spread of cost and chance of being the cheapest (Spread tab)"),
     ] + [Binding(str(i + 1), f"tab({i})", f"detail tab: {title}") for i, (_, title) in enumerate(TABS)]
 
     def __init__(self, opened: Opened, routes: Sequence[Any] | None = None,
@@ -66,6 +69,7 @@ class MainScreen(Filing, Working, Screen):
         self.book: Any = None
         self._extras = False
         self._busy_timer: Any = None
+        self.tornadoes = {}
 
     def compose(self) -> ComposeResult:
         yield Static(id="title-line")
@@ -156,6 +160,7 @@ class MainScreen(Filing, Working, Screen):
         else:
             self._say(ranked, bool(comparison.failures))
         self.redraw_charts(outcome, generation)
+        self.whatif_update()
 
     def _curves(self, generation: int, curves: dict[str, Any]) -> None:
         if generation != self.generation:
@@ -236,6 +241,11 @@ class MainScreen(Filing, Working, Screen):
     def _chosen(self, event: RouteChosen) -> None:
         if self.outcome is not None:
             self._show_selected()
+            self.whatif_update()
+
+    @on(TabbedContent.TabActivated, "#detail-tabs")
+    def _tab_opened(self, event: TabbedContent.TabActivated) -> None:
+        self.whatif_tab_opened(str(event.pane.id))
 
     @on(WeightNudged)
     def _nudged(self, event: WeightNudged) -> None:

@@ -1,6 +1,7 @@
 """The selected route in full: the batch as bought, heat, raw gas and dryer, delivery, costs,
-and the cost-against-batch chart for every route. The cautions sit in their own panel beside it
-(:class:`CautionPanel`) so they stay on screen whichever tab is open.
+the cost-against-batch chart for every route, and the what-if tabs (:mod:`tui.widgets.whatif`).
+The cautions sit in their own panel beside it (:class:`CautionPanel`) so they stay on screen
+whichever tab is open.
 
 Dryer and delivery results are shown when the route's result carries them (``result.dryer``,
 ``result.delivery``); their numeric fields are laid out by the unit in their names.
@@ -23,10 +24,11 @@ from thermo.cautions import LOCAL_CODES
 from tui.output import format_value, label_of
 from tui.widgets import css_of
 from tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, SaturationPlot
+from tui.widgets.whatif import SpreadPanel, TornadoPanel
 
-#: The tabs, in order: (id, title). Digits 1-5 pick them.
+#: The tabs, in order: (id, title). Digits 1-7 pick them.
 TABS = (("t-batch", "Batch"), ("t-gas", "Gas & dryer"), ("t-delivery", "Delivery"),
-        ("t-costs", "Costs"), ("t-curve", "Cost vs batch"))
+        ("t-costs", "Costs"), ("t-curve", "Cost vs batch"), ("t-whatif", "What if"), ("t-spread", "Spread"))
 
 
 def _table(*headings: str) -> Table:
@@ -213,6 +215,10 @@ class RouteDetail(Vertical):
                     yield Bars(id="cost-bars")
             with TabPane(TABS[4][1], id=TABS[4][0]):
                 yield CostCurve(id="cost-curve")
+            with TabPane(TABS[5][1], id=TABS[5][0]):
+                yield TornadoPanel(id="whatif")
+            with TabPane(TABS[6][1], id=TABS[6][0]):
+                yield SpreadPanel(id="spread")
 
     def show(self, row: Any | None, currency: str, end_product: str, curve: Any = None) -> None:
         """Fill every tab from ``row`` (a comparison row), or say that nothing is selected;
@@ -239,6 +245,11 @@ class RouteDetail(Vertical):
     def show_saturation(self, curve: Any) -> None:
         """Draw the saturation line chart."""
         self.query_one("#saturation", SaturationPlot).draw(curve)
+
+    @property
+    def active(self) -> str:
+        """The id of the open tab."""
+        return self.query_one("#detail-tabs", TabbedContent).active
 
     def pick(self, index: int) -> None:
         """Open tab number ``index`` (0-based)."""

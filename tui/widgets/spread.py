@@ -14,11 +14,29 @@ from __future__ import annotations
 
 from typing import Any
 
+import math
+
 import numpy as np
 from textual_plotext import PlotextPlot
 
 #: bins of the histogram
 BINS = 40
+
+
+def log_ticks(low: float, high: float) -> list[float]:
+    """Tick values 1, 2, 5 x 10^k from ``low`` to ``high`` (both > 0), thinned to at most six.
+
+    >>> log_ticks(0.7, 75.0)
+    [1.0, 2.0, 5.0, 10.0, 20.0, 50.0]
+    >>> log_ticks(0.7, 750.0)
+    [1.0, 10.0, 100.0]
+    """
+    ticks = [m * 10.0 ** k for k in range(math.floor(math.log10(low)), math.ceil(math.log10(high)) + 1)
+             for m in (1.0, 2.0, 5.0)]
+    ticks = [t for t in ticks if low <= t <= high]
+    if len(ticks) > 6:
+        ticks = [t for t in ticks if math.isclose(math.log10(t), round(math.log10(t)))]
+    return ticks or [low, high]
 
 
 class Spread(PlotextPlot):
@@ -47,26 +65,36 @@ class Spread(PlotextPlot):
         plt = self.plt
         plt.clear_figure()
         cur = result.currency
+        # titles and axis labels kept short: plotext leaves out one wider than the chart
         if route_id is not None:
             route = next((r for r in routes if r.route_id == route_id), None)
             if route is None:
                 self.empty(f"uncertainty: {route_id} has no known cost")
                 return
-            plt.title(f"{route.label}: cost per kg CO2 ({cur}), {result.samples} samples; "
-                      f"cheapest in {route.probability_cheapest:.0%}")
+            plt.title(f"{route.label}: {result.samples} samples")
             plt.hist(route.samples.tolist(), BINS)
             for value in (route.cost_per_kg_p10, route.cost_per_kg_p50, route.cost_per_kg_p90):
                 plt.vline(value, "gray")
-            plt.xlabel(f"cost per kg CO2 ({cur}); lines at P10, P50, P90")
+            plt.xlabel(f"{cur}/kg; lines: P10 P50 P90")
+            plt.ylabel("samples")
             self.showing = f"histogram of {route_id}"
         else:
             labels, boxes = [], []
-            for r in routes:
+            # plotext draws the first box at the bottom: the catalogue's first route goes last, on top
+            for r in reversed(routes):
                 low, high = np.percentile(r.samples, [2.5, 97.5])
-                labels.append(f"{r.route_id[:18]} {r.probability_cheapest:.0%}")
+                labels.append(f"{r.route_id[:20]} {r.probability_cheapest:.0%}")
                 boxes.append([float(high), r.cost_per_kg_p90, r.cost_per_kg_p50, r.cost_per_kg_p10, float(low)])
-            plt.title(f"cost per kg CO2 ({cur}), {result.samples} samples: box P10-P90, median, "
-                      "whiskers P2.5-P97.5; % = chance of being cheapest")
+            plt.title("box P10..P90, | median, whiskers P2.5..P97.5")
+            least, most = min(b[-1] for b in boxes), max(b[0] for b in boxes)
+            log = least > 0 and most > 10 * least
+            if log:
+                # one dear route would squash every other box into a column: draw log10 of the cost
+                # and label the ticks with the cost itself (plotext's own log scale breaks on boxes)
+                boxes = [[math.log10(v) for v in b] for b in boxes]
+                ticks = log_ticks(least, most)
+                plt.xticks([math.log10(t) for t in ticks], [f"{t:g}" for t in ticks])
             plt.box(labels, boxes, quintuples=True, orientation="horizontal", width=0.3)
+            plt.xlabel(f"{cur}/kg{' (log scale)' if log else ''}; % = cheapest")
             self.showing = f"boxes of {len(routes)} routes"
         self.refresh()

@@ -1,8 +1,8 @@
 """The tornado chart: one route's inputs swung one at a time, the widest swing on top.
 
-Draws a :class:`sources.sensitivity.RouteSensitivity` (it does no computing): for each input, a bar
-from the nominal cost per kg to the cost with the input at its low end and another to the cost at
-its high end, as differences from the nominal cost. Mount it anywhere and call :meth:`draw`::
+Draws a :class:`sources.sensitivity.RouteSensitivity` (it does no computing): for each input, one
+line holding a bar from the nominal cost per kg to the cost with the input at its low end and
+another to the cost at its high end, as differences from the nominal cost. Mount it anywhere and call :meth:`draw`::
 
     from tui.widgets.tornado import Tornado
     yield Tornado(id="tornado")
@@ -17,6 +17,21 @@ from typing import Any
 from textual_plotext import PlotextPlot
 
 
+def short_name(name: str) -> str:
+    """An input's name as a chart or table of one route labels it.
+
+    >>> short_name("prices.sucrose"), short_name("options.fermentation.sugar_concentration")
+    ('sucrose price', 'sugar concentration')
+    >>> short_name("delivery.efficiency")
+    'delivery efficiency'
+    """
+    if name.startswith("prices."):
+        return f"{name[len('prices.'):]} price"
+    if name.startswith("options.") and name.count(".") >= 2:
+        name = name.split(".", 2)[2]
+    return name.replace(".", " ").replace("_", " ")
+
+
 class Tornado(PlotextPlot):
     """A tornado chart of one route's one-at-a-time sensitivity."""
 
@@ -24,6 +39,8 @@ class Tornado(PlotextPlot):
 
     #: inputs drawn at most (the rest are the narrowest and are left out)
     TOP = 8
+    #: colours of the low-end and the high-end bars (plotext colour names, said in the axis label)
+    LOW, HIGH = "blue", "red"
 
     def __init__(self, **kwargs: Any) -> None:
         super().__init__(**kwargs)
@@ -49,17 +66,26 @@ class Tornado(PlotextPlot):
             self.empty(f"sensitivity of {route.label}: no input moves its cost")
             return
         nominal = route.cost_per_kg
-        # plotext puts the first bar of a horizontal chart at the bottom: widest last, so on top
-        shown = list(reversed(known))
-        names = [s.name.split(".", 1)[-1][:24] for s in shown]
         plt = self.plt
         plt.clear_figure()
-        plt.title(f"{route.label}: cost per kg {nominal:.2f} {currency}, change with each input")
-        plt.multiple_bar(names, [[s.cost_per_kg_low - nominal for s in shown],
-                                 [s.cost_per_kg_high - nominal for s in shown]],
-                         labels=["input at its low end", "input at its high end"], orientation="horizontal")
+        plt.title(f"{route.label}: {nominal:.2f} {currency}/kg at nominal inputs".replace(" /kg", " per kg"))
+        # one line per input, widest on top: a bar from the nominal cost to the cost with the input
+        # at its low end (LOW colour) and another to the cost with it at its high end (HIGH colour)
+        n = len(known)
+        for i, s in enumerate(known):
+            y = n - i
+            plt.plot([s.cost_per_kg_low - nominal, 0.0], [y, y], color=self.LOW, marker="hd")
+            plt.plot([0.0, s.cost_per_kg_high - nominal], [y, y], color=self.HIGH, marker="hd")
+        reach = max(max(abs(s.cost_per_kg_low - nominal), abs(s.cost_per_kg_high - nominal)) for s in known)
+        reach = reach or 1.0
+        ticks = [-reach, -reach / 2, 0.0, reach / 2, reach]
+        plt.xticks(ticks, [f"{t:+.2g}" if t else "0" for t in ticks])
+        plt.xlim(-1.05 * reach, 1.05 * reach)
+        plt.yticks(list(range(n, 0, -1)), [short_name(s.name)[:20] for s in known])
+        plt.ylim(0.5, n + 0.5)
         plt.vline(0.0, "gray")
-        plt.xlabel(f"change in cost per kg CO2 ({currency})".replace(" ()", ""))
+        # kept short: plotext leaves out an axis label wider than the chart
+        plt.xlabel(f"change in {currency}/kg".replace("in /kg", "per kg"))
         self.names = tuple(s.name for s in known)
         self.showing = f"tornado of {route.route_id}"
         self.refresh()
