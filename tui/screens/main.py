@@ -89,7 +89,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         with Horizontal(id="status-line"):
             yield Static("starting…", id="status")
             yield ProgressBar(total=None, show_eta=False, show_percentage=False, id="busy")
-            yield Static("F1 keys  ^S save  ^O open  ^Q quit", id="key-hint")
+            yield Static(f"F1 every key · {SPREAD_KEY} spread · ctrl+s save · ctrl+q quit", id="key-hint")
 
     def on_mount(self) -> None:
         form = self.query_one(ScenarioForm)

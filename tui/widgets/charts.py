@@ -1,5 +1,8 @@
 """Charts drawn in the terminal with textual-plotext. Each takes data already computed by a
-worker (see :mod:`tui.compute`) and only draws it; an empty chart says why it is empty."""
+worker (see :mod:`tui.compute`) and only draws it; an empty chart says why it is empty.
+
+Titles and axis labels are kept short, the unit on its axis: plotext leaves out a title or label
+wider than the chart, and these charts are often narrow."""
 
 from __future__ import annotations
 
@@ -44,7 +47,7 @@ class CostCurve(_Chart):
         if sweep is None or not sweep.cost_per_kg:
             self.empty("cost per kg against batch size: no routes to draw")
             return
-        plt = self._start(f"{sweep.currency} per kg against kg per batch")
+        plt = self._start("cost per kg against batch size")
         drawn = 0
         for rid, costs in sweep.cost_per_kg.items():
             pts = [(x, y) for x, y in zip(sweep.co2_kg, costs) if y is not None and math.isfinite(y)]
@@ -60,6 +63,7 @@ class CostCurve(_Chart):
         if known and max(known) > 20 * min(known):
             plt.yscale("log")  # one dear route would flatten all the others
         plt.xlabel("kg CO2 per batch")
+        plt.ylabel(f"{sweep.currency}/kg")
         if current_kg:
             plt.vline(current_kg, "gray")
         self.showing = f"cost curve of {drawn} routes"
@@ -74,11 +78,13 @@ class SaturationPlot(_Chart):
         if curve is None:
             self.empty("saturation line: not worked out yet")
             return
-        plt = self._start("CO2 saturation: bar against degC")
+        plt = self._start("CO2 saturation line")
         plt.plot([t - 273.15 for t in curve.temperatures_k], [p / 1e5 for p in curve.pressures_pa],
                  label="saturation", marker="braille")
         for label, t, p in curve.marks:
             plt.scatter([t - 273.15], [p / 1e5], label=f"{label} {p / 1e5:.1f} bar", marker="●")
+        plt.xlabel("degC")
+        plt.ylabel("bar")
         self.showing = "saturation line with " + ", ".join(m[0] for m in curve.marks)
         self.refresh()
 
@@ -92,8 +98,10 @@ class BreakthroughPlot(_Chart):
             self.empty("breakthrough curve: no dryer, or not worked out yet")
             return
         hours, values, label = points
-        plt = self._start(f"breakthrough: {label} against hours")
+        plt = self._start("dryer breakthrough")
         plt.plot(list(hours), list(values), marker="braille")
+        plt.xlabel("h on stream")
+        plt.ylabel(label.rsplit(", ", 1)[-1])  # the unit of "outlet water, ppmv"
         self.showing = "breakthrough curve"
         self.refresh()
 

@@ -40,9 +40,30 @@ def _n(value: float | None, fmt: str = "{:.3f}") -> str:
     return "unknown" if value is None else fmt.format(value)
 
 
+#: Field-name endings of result dataclasses that the command line's table does not convert,
+#: with the label unit and the factor from SI: (ending, unit, factor).
+FIELD_UNITS = (("_j_per_kg", "kJ/kg", 1e-3), ("_kg_s", "kg/h", 3600.0), ("_j", "kJ", 1e-3),
+               ("_s", "h", 1 / 3600.0))
+
+
+def fact(name: str, value: Any) -> tuple[str, str]:
+    """``(label, value with unit)`` of one result field, the unit read from its name.
+
+    >>> fact("work_j_per_kg", 329106.0), fact("mass_flow_kg_s", 0.0015), fact("batch_time_s", None)
+    (('work', '329.1 kJ/kg'), ('mass flow', '5.4 kg/h'), ('batch time', 'unknown'))
+    >>> fact("condensing_pressure_pa", 3.485e6)[0]
+    'condensing pressure'
+    """
+    for ending, unit, factor in FIELD_UNITS:
+        if name.endswith(ending) and not isinstance(value, (bool, str)):
+            label = name[: -len(ending)].replace("_", " ")
+            return label, "unknown" if value is None else f"{value * factor:.4g} {unit}"
+    return label_of(name)[0], format_value(name, value)
+
+
 def facts(obj: Any, skip: tuple[str, ...] = ()) -> Table:
     """The numeric and text fields of a result dataclass as ``label  value`` lines, units taken
-    from the field names (``_kg``, ``_pa``, ``_k`` ...)."""
+    from the field names (``_kg``, ``_pa``, ``_k`` ..., and :data:`FIELD_UNITS`)."""
     table = _table("", "")
     table.show_header = False
     if obj is None or not dataclasses.is_dataclass(obj):
@@ -53,8 +74,8 @@ def facts(obj: Any, skip: tuple[str, ...] = ()) -> Table:
             continue
         if dataclasses.is_dataclass(value):
             continue
-        label, _ = label_of(f.name)
-        table.add_row(Text(label, style="dim"), format_value(f.name, value))
+        label, shown = fact(f.name, value)
+        table.add_row(Text(label, style="dim"), shown)
     return table
 
 

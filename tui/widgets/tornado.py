@@ -35,7 +35,7 @@ def short_name(name: str) -> str:
 class Tornado(PlotextPlot):
     """A tornado chart of one route's one-at-a-time sensitivity."""
 
-    DEFAULT_CSS = "Tornado { height: 1fr; min-height: 12; }"
+    DEFAULT_CSS = "Tornado { height: 6; }"
 
     #: inputs drawn at most (the rest are the narrowest and are left out)
     TOP = 8
@@ -54,6 +54,7 @@ class Tornado(PlotextPlot):
         self.plt.clear_figure()
         self.plt.title(why)
         self.showing, self.names = "empty", ()
+        self.styles.height = 6
         self.refresh()
 
     def draw(self, route: Any, currency: str = "") -> None:
@@ -74,8 +75,8 @@ class Tornado(PlotextPlot):
         n = len(known)
         for i, s in enumerate(known):
             y = n - i
-            plt.plot([s.cost_per_kg_low - nominal, 0.0], [y, y], color=self.LOW, marker="hd")
-            plt.plot([0.0, s.cost_per_kg_high - nominal], [y, y], color=self.HIGH, marker="hd")
+            plt.plot([s.cost_per_kg_low - nominal, 0.0], [y, y], color=self.LOW, marker="█")
+            plt.plot([0.0, s.cost_per_kg_high - nominal], [y, y], color=self.HIGH, marker="█")
         reach = max(max(abs(s.cost_per_kg_low - nominal), abs(s.cost_per_kg_high - nominal)) for s in known)
         reach = reach or 1.0
         ticks = [-reach, -reach / 2, 0.0, reach / 2, reach]
@@ -83,6 +84,9 @@ class Tornado(PlotextPlot):
         plt.xlim(-1.05 * reach, 1.05 * reach)
         plt.yticks(list(range(n, 0, -1)), [short_name(s.name)[:20] for s in known])
         plt.ylim(0.5, n + 0.5)
+        # exactly one row per input (title, frame, tick labels and axis label take five more):
+        # with fewer rows plotext leaves out some inputs' names
+        self.styles.height = n + 5
         plt.vline(0.0, "gray")
         # kept short: plotext leaves out an axis label wider than the chart
         plt.xlabel(f"change in {currency}/kg".replace("in /kg", "per kg"))

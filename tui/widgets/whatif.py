@@ -87,7 +87,7 @@ class SpreadPanel(VerticalScroll):
     """The "Spread" tab: the Monte Carlo progress bar, the chosen route's percentiles and chance of
     being cheapest, the box chart of every route and under it the chosen route's histogram."""
 
-    DEFAULT_CSS = css_of(__file__)
+    DEFAULT_CSS = css_of(__file__, "whatif-spread.tcss")
 
     def compose(self) -> ComposeResult:
         yield ProgressBar(total=None, show_eta=False, id="spread-bar")
