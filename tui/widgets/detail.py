@@ -129,7 +129,7 @@ def recipe(row: Any, currency: str) -> Group:
             left.add_row(b.name, b.formula, _n(b.mass_kg), b.note)
         parts += [Text(""), left]
     dt = r.temperature_change_k
-    heat = Text.assemble(("heat ", "bold"), f"{r.heat_kj:+.1f} kJ: {heat_words(r.heat_kj)}")
+    heat = Text.assemble(("heat ", "bold"), f"{r.heat_kj:+.1f} kJ: {heat_words(r.heat_kj, r.temperature_change_k is not None)}")
     if dt is not None:
         heat.append(f"; the liquor {'warms' if dt > 0 else 'cools'} by {abs(dt):.1f} K")
     parts += [Text(""), heat,
