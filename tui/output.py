@@ -21,6 +21,8 @@ _SUFFIXES: dict[str, tuple[str, float, float]] = {
     "_g_per_kg_co2": ("g/kg CO2", 1.0, 0.0),
     "_kj_per_kg_co2": ("kJ/kg CO2", 1.0, 0.0),
     "_kj_per_kg": ("kJ/kg", 1.0, 0.0),
+    "_j_per_kg": ("kJ/kg", 1e-3, 0.0),
+    "_kg_s": ("kg/h", 3600.0, 0.0),
     "_kj_per_mol": ("kJ/mol", 1.0, 0.0),
     "_kwh_per_kg": ("kWh/kg", 1.0, 0.0),
     "_kg_per_cycle": ("kg/cycle", 1.0, 0.0),
@@ -40,6 +42,8 @@ _SUFFIXES: dict[str, tuple[str, float, float]] = {
     "_m3": ("m³", 1.0, 0.0),
     "_m": ("m", 1.0, 0.0),
     "_h": ("h", 1.0, 0.0),
+    "_s": ("h", 1.0 / 3600.0, 0.0),
+    "_j": ("kJ", 1e-3, 0.0),
     "_ppmv": ("ppmv", 1.0, 0.0),
 }
 
