@@ -133,12 +133,7 @@ def comparison_table(comparison: Comparison) -> str:
     lines.append("hazard: 1 low, 2 moderate, 3 high; heat: + takes heat in, - gives heat off")
     for text, ids in grouped_warnings(record).items():
         lines.append(f"WARNING [{', '.join(ids)}]: {text}")
-    seen: list[str] = []
-    for route in record["routes"]:
-        for c in route["cautions"]:
-            if c not in seen:
-                seen.append(c)
-    lines += [f"caution: {c}" for c in seen] + [f"caution: {LOCAL_CODES}"]
+    lines += [f"caution: {c}" for c in record["cautions"]] + [f"caution: {LOCAL_CODES}"]
     lines += [f"note: {f}" for f in record["failures"]]
     return "\n".join(lines)
 
@@ -163,12 +158,7 @@ def comparison_markdown(comparison: Comparison) -> str:
     out.append("")
     for text, ids in grouped_warnings(record).items():
         out.append(f"- **{', '.join(ids)}**: {text}")
-    seen: list[str] = []
-    for route in record["routes"]:
-        for c in route["cautions"]:
-            if c not in seen:
-                seen.append(c)
-    out += [f"- {c}" for c in seen] + [f"- {LOCAL_CODES}"]
+    out += [f"- {c}" for c in record["cautions"]] + [f"- {LOCAL_CODES}"]
     return "\n".join(out) + "\n"
 
 
