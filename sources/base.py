@@ -222,7 +222,7 @@ class RawGas:
 
 @dataclass(frozen=True, slots=True)
 class RouteResult:
-    """The full answer of a route for one batch. Costs are filled by :mod:`sources.costing`."""
+    """The full answer of a route for one batch. Costs are filled by :func:`sources.compare.evaluate`."""
 
     route_id: str
     label: str
