@@ -21,7 +21,7 @@ run: $(VENV)/.installed
 	$(VENV)/bin/co2routes
 
 test: $(VENV)/.installed-test
-	$(PY) -m pytest
+	$(VENV)/bin/pytest
 
 bench: $(VENV)/.installed-test
 	$(PY) bench/run.py --write docs/benchmarks.md

@@ -14,8 +14,8 @@ How each is measured:
   first refresh), and ``python -c "import textual"``.
 - **Recompute latency.** In one warm process: edit the scenario document (a different demand each
   repeat, so no cache can answer), then validate it and rank every route, which is what the
-  interface's recompute worker does (``tui.compute.outcome``).
-- **Monte Carlo.** ``sources.uncertainty.uncertainty`` on the demo scenario with a bench
+  interface's recompute worker does (``co2routes.tui.compute.outcome``).
+- **Monte Carlo.** ``co2routes.sources.uncertainty.uncertainty`` on the demo scenario with a bench
   ``[uncertain]`` table (every price of every route, plus non-price inputs), 10,000 samples: route
   evaluations at the grid nodes, then the vectorised sampling; and the whole command
   ``co2routes uncertainty --samples 10000 --json`` in a fresh process.
@@ -44,7 +44,7 @@ TARGETS = {"recompute_ms": 50.0, "mc_compute_s": 1.0, "mc_command_s": 4.0, "cold
 APP_CHILD = r"""
 import sys, time
 from textual.widgets import DataTable
-from tui.app import Co2RoutesApp
+from co2routes.tui.app import Co2RoutesApp
 
 class Timed(Co2RoutesApp):
     def on_ready(self):
@@ -154,9 +154,9 @@ def bench_recompute(repeats: int, which: str = "polytunnel") -> dict:
     """Median time of validate + rank every route after one edit of the document (warm)."""
     import copy
 
-    from sources.registry import catalogue
-    from sources.scenario import demo
-    from tui.compute import outcome
+    from co2routes.sources.registry import catalogue
+    from co2routes.sources.scenario import demo
+    from co2routes.tui.compute import outcome
 
     document = copy.deepcopy(dict(demo(which).document))
     start = time.perf_counter()
@@ -181,10 +181,10 @@ def bench_monte_carlo(repeats: int, samples: int = 10_000) -> dict:
     """In-process compute time of the Monte Carlo and the whole command's wall time."""
     import tomllib
 
-    from sources.registry import catalogue
-    from sources.scenario import demo_text, validate
-    from sources.uncertainty import default_distributions, uncertainty
-    from sources.whatif import parse_uncertain
+    from co2routes.sources.registry import catalogue
+    from co2routes.sources.scenario import demo_text, validate
+    from co2routes.sources.uncertainty import default_distributions, uncertainty
+    from co2routes.sources.whatif import parse_uncertain
 
     text = demo_text() + BENCH_UNCERTAIN
     scenario = validate(tomllib.loads(text), "bench", text)
@@ -201,7 +201,7 @@ def bench_monte_carlo(repeats: int, samples: int = 10_000) -> dict:
         path.write_text(text, encoding="utf-8")
         command, values = median_of(lambda: launch([str(ROOT / ".venv/bin/co2routes"), "uncertainty", str(path),
                                                     "--samples", str(samples), "--seed", "1", "--json"]), repeats)
-    probe = ("import sys, io, contextlib; from tui.cli import main\n"
+    probe = ("import sys, io, contextlib; from co2routes.tui.cli import main\n"
              "with contextlib.redirect_stdout(io.StringIO()): main(['uncertainty', '--samples', '10', '--json'])\n"
              "print([m for m in ('CoolProp', 'cantera', 'pint', 'scipy') if m in sys.modules])")
     loaded = subprocess.run([PY, "-c", probe], capture_output=True, text=True, cwd=ROOT).stdout.strip()
@@ -252,7 +252,7 @@ def _vapour_pressure_alternatives() -> dict:
                                                       check=True).stdout) for _ in range(3))
     import numpy as np
 
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     cp = coolprop()
     temps = np.linspace(273.16, 373.15, 401)
@@ -323,8 +323,8 @@ def report(results: dict) -> str:
         f"The same for the dry-ice demo ({results['recompute_dry_ice']['demo']}, end product "
         f"{results['recompute_dry_ice']['end_product']}, so delivery is in the chain too): median "
         f"{results['recompute_dry_ice']['median_ms']:.2f} ms, p90 {results['recompute_dry_ice']['p90_ms']:.2f} ms.",
-        "The bench calls the interface's own recompute (`tui.compute.outcome`: validate, then "
-        "`sources.compare.compare`, which adds each route's gas conditioning as it is written today).", "",
+        "The bench calls the interface's own recompute (`co2routes.tui.compute.outcome`: validate, then "
+        "`co2routes.sources.compare.compare`, which adds each route's gas conditioning as it is written today).", "",
         "## Monte Carlo", "",
         f"{mc['samples']:,} samples x {mc['routes']} routes, {mc['inputs']} uncertain inputs of which "
         f"{mc['non_price_inputs']} are not prices (each evaluated at 9 grid nodes per route it touches).", "",
@@ -340,7 +340,7 @@ def report(results: dict) -> str:
     lines += [
         "", "### The one CoolProp call on the ranking's path", "",
         "The first ranked frame waits for the acid-carbonate route, whose raw-gas water content calls "
-        "`thermo.water.vapor_pressure_liquid`, i.e. CoolProp. Alternatives measured:", "",
+        "`co2routes.thermo.water.vapor_pressure_liquid`, i.e. CoolProp. Alternatives measured:", "",
         f"- CoolProp {m['libraries']['CoolProp']} import and first call: {imp['coolprop_import_and_first_call_s']:.2f} s; "
         f"then {imp['coolprop_call_us']:.1f} us a call.",
         f"- IAPWS auxiliary saturation equation (Wagner & Pruss 1993), pure Python: no import, "

@@ -2,7 +2,7 @@
 
 A route is any object with ``id``, ``label``, ``options`` (a tuple of :class:`Option`) and
 ``compute(request) -> RouteResult``. Routes are found through the ``co2routes.sources`` entry-point
-group (see :mod:`sources.registry`); the built-in ones register the same way in our own
+group (see :mod:`co2routes.sources.registry`); the built-in ones register the same way in our own
 ``pyproject.toml``.
 
 Every quantity here is SI (kg, K, Pa, s) except where a field name says otherwise (``_kj``,
@@ -15,11 +15,11 @@ import re
 from dataclasses import dataclass, field
 from typing import Any, Mapping, Protocol, runtime_checkable
 
-from thermo.errors import InputError
-from thermo.units import parse
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.units import parse
 
 
-#: Short symbols of the SI units of :data:`thermo.units.DIMENSIONS`, for messages.
+#: Short symbols of the SI units of :data:`co2routes.thermo.units.DIMENSIONS`, for messages.
 _SI_SYMBOLS = {"kelvin": "K", "pascal": "Pa", "meter ** 3": "m**3", "kilogram": "kg", "meter": "m",
                "meter ** 2": "m**2", "second": "s", "joule": "J", "watt": "W",
                "kilogram / second": "kg/s", "meter ** 3 / second": "m**3/s",
@@ -31,7 +31,7 @@ _SI_SYMBOLS = {"kelvin": "K", "pascal": "Pa", "meter ** 3": "m**3", "kilogram": 
 class Option:
     """One setting of a route, typed by the user as a string.
 
-    ``dimension`` is a :mod:`thermo.units` dimension (the value is parsed to an SI float and
+    ``dimension`` is a :mod:`co2routes.thermo.units` dimension (the value is parsed to an SI float and
     checked against ``low``/``high``, both SI), or ``"choice"`` (the value must be one of
     ``choices``), or ``"count"`` (a whole number within ``low``/``high``).
 
@@ -40,7 +40,7 @@ class Option:
     >>> Option("acid", "acid", "choice", "hcl", choices=("hcl", "acetic")).parse("vinegar")
     Traceback (most recent call last):
     ...
-    thermo.errors.InputError: option acid: must be one of hcl, acetic (got 'vinegar')
+    co2routes.thermo.errors.InputError: option acid: must be one of hcl, acetic (got 'vinegar')
     """
 
     key: str
@@ -101,7 +101,7 @@ class Option:
 
     def _shown_in(self):
         """A formatter of SI values in the unit of the default (``"5 kPa"`` -> kPa)."""
-        from thermo.units import DIMENSIONS, to_unit
+        from co2routes.thermo.units import DIMENSIONS, to_unit
 
         match = re.match(r"^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*(\S.*)?$", self.default)
         unit = (match.group(1) or "").strip() if match else None
@@ -222,7 +222,7 @@ class RawGas:
 
 @dataclass(frozen=True, slots=True)
 class RouteResult:
-    """The full answer of a route for one batch. Costs are filled by :func:`sources.compare.evaluate`."""
+    """The full answer of a route for one batch. Costs are filled by :func:`co2routes.sources.compare.evaluate`."""
 
     route_id: str
     label: str
@@ -249,9 +249,9 @@ class RouteResult:
     #: kg of end product (gas, liquid or dry ice) the batch yields after drying and delivery;
     #: ``None`` means the CO2 delivered (``co2_kg``) is the product. Per-kg figures use it.
     product_kg: float | None = None
-    #: the dryer sized for this route's raw gas (a :class:`thermo.dryer.DryerResult`), if any
+    #: the dryer sized for this route's raw gas (a :class:`co2routes.thermo.dryer.DryerResult`), if any
     dryer: Any = None
-    #: compression / flash to the end product (a :class:`sources.delivery.Delivery`), if any
+    #: compression / flash to the end product (a :class:`co2routes.sources.delivery.Delivery`), if any
     delivery: Any = None
 
     @property

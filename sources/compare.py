@@ -2,7 +2,7 @@
 
 For each route: compute the batch, size its dryer from its raw gas, add delivery (compression,
 storage, dry ice) when the end product asks for it, price everything with the scenario's price
-book, then rank all routes by a weighted score of the criteria in :data:`sources.scenario.CRITERIA`.
+book, then rank all routes by a weighted score of the criteria in :data:`co2routes.sources.scenario.CRITERIA`.
 
 The score is this project's own: each criterion is scaled across the routes to 0 (best) .. 1
 (worst), an unknown value counts as worst, and the weighted mean of the scaled criteria orders the
@@ -15,10 +15,10 @@ import dataclasses
 from dataclasses import dataclass
 from typing import Any, Callable, Mapping, Sequence
 
-from sources.base import Route, RouteRequest, RouteResult, Use, parse_options
-from sources.prices import cost_lines
-from sources.registry import catalogue
-from sources.scenario import CRITERIA, Scenario
+from co2routes.sources.base import Route, RouteRequest, RouteResult, Use, parse_options
+from co2routes.sources.prices import cost_lines
+from co2routes.sources.registry import catalogue
+from co2routes.sources.scenario import CRITERIA, Scenario
 
 #: How each criterion is read off a row, and whether higher is better.
 _CRITERION: dict[str, tuple[Callable[["RouteRow"], float | None], bool]] = {
@@ -64,11 +64,11 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
 
     ``co2_kg`` is the end product wanted (default the scenario's demand); ``options`` override
     the scenario's options for this route. For dry ice the route is asked for the raw CO2 the
-    flash needs (:func:`sources.delivery.raw_co2_needed`). The batch's time is the longer of the
+    flash needs (:func:`co2routes.sources.delivery.raw_co2_needed`). The batch's time is the longer of the
     route's and the compressor's (the compressor draws from a buffer while the gas comes).
     """
-    from sources.conditioning import condition
-    from sources.delivery import plan_delivery, raw_co2_needed
+    from co2routes.sources.conditioning import condition
+    from co2routes.sources.delivery import plan_delivery, raw_co2_needed
 
     given = dict(scenario.options.get(route.id, {}))
     given.update(options or {})
@@ -151,7 +151,7 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
         try:
             results.append(evaluate(route, scenario))
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
-            from thermo.errors import InputError
+            from co2routes.thermo.errors import InputError
 
             if isinstance(err, InputError):
                 raise
@@ -165,7 +165,7 @@ def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:
 
     Without this a mistyped route id would leave that route on its defaults without a word.
     """
-    from thermo.errors import InputError
+    from co2routes.thermo.errors import InputError
 
     known = {r.id for r in routes}
     for route_id in scenario.options:
@@ -202,7 +202,7 @@ def row_record(row: RouteRow) -> dict[str, Any]:
 
 
 def dryer_record(bed: Any) -> dict[str, Any] | None:
-    """The sized bed of a route (a :class:`thermo.dryer.DryerResult`) as JSON, ``None`` without one.
+    """The sized bed of a route (a :class:`co2routes.thermo.dryer.DryerResult`) as JSON, ``None`` without one.
 
     >>> dryer_record(None) is None
     True
@@ -228,7 +228,7 @@ def dryer_record(bed: Any) -> dict[str, Any] | None:
 
 
 def delivery_record(delivery: Any) -> dict[str, Any] | None:
-    """Compression and flash of a route (a :class:`sources.delivery.Delivery`) as JSON.
+    """Compression and flash of a route (a :class:`co2routes.sources.delivery.Delivery`) as JSON.
 
     ``None`` when the end product is gas. Compression figures are ``None`` when the route hands
     over CO2 already condensed or solid (bought); ``work_kj_per_kg`` and

@@ -3,7 +3,7 @@
 The raw gas of a route reaches the site temperature in the line before the dryer (cooled in an
 ambient aftercooler when it leaves hotter; water above saturation there condenses and drains),
 then is dried in one bed
-sized by :func:`thermo.dryer.size_dryer` for the scenario's desiccant, target and cycle. The gas
+sized by :func:`co2routes.thermo.dryer.size_dryer` for the scenario's desiccant, target and cycle. The gas
 flows for the route's batch time, so a batch uses ``t_batch / t_cycle`` of a cycle: that share of
 the regeneration heat (as electricity, the usual small-rig electric heater) and of the desiccant
 charge's service life (``bed mass / service_life_cycles`` per cycle) is charged to the batch.
@@ -14,7 +14,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any
 
-from sources.base import RouteResult, Site, Use
+from co2routes.sources.base import RouteResult, Site, Use
 
 
 @dataclass(frozen=True, slots=True)
@@ -29,10 +29,10 @@ class Conditioning:
 
 
 def dryer_input(result: RouteResult, plan, site: Site) -> tuple[Any | None, tuple[str, ...]]:
-    """The :class:`thermo.dryer.DryerInput` for ``result``'s raw gas, or ``None`` with the reason
+    """The :class:`co2routes.thermo.dryer.DryerInput` for ``result``'s raw gas, or ``None`` with the reason
     when no dryer is needed; the second item holds notes for the result."""
-    from thermo import water
-    from thermo.dryer import ISBT_WATER_PPMV, DryerInput
+    from co2routes.thermo import water
+    from co2routes.thermo.dryer import ISBT_WATER_PPMV, DryerInput
 
     gas = result.raw_gas
     if result.delivers != "raw-gas" or result.time_h <= 0:
@@ -65,9 +65,9 @@ def dryer_input(result: RouteResult, plan, site: Site) -> tuple[Any | None, tupl
 
 
 def breakthrough(result: RouteResult, plan, site: Site, points: int = 41):
-    """The breakthrough curve of the bed sized for ``result`` (``thermo.dryer.CurvePoint``s),
+    """The breakthrough curve of the bed sized for ``result`` (``co2routes.thermo.dryer.CurvePoint``s),
     or ``None`` when the route has no dryer."""
-    from thermo.dryer import breakthrough_curve
+    from co2routes.thermo.dryer import breakthrough_curve
 
     inp, _ = dryer_input(result, plan, site)
     if inp is None or result.dryer is None:
@@ -77,9 +77,9 @@ def breakthrough(result: RouteResult, plan, site: Site, points: int = 41):
 
 def condition(result: RouteResult, plan, site: Site) -> Conditioning:
     """Size and charge the dryer for ``result``'s raw gas under the scenario's ``plan``."""
-    from thermo.desiccants import get_desiccant
-    from thermo.dryer import size_dryer
-    from thermo.errors import InputError
+    from co2routes.thermo.desiccants import get_desiccant
+    from co2routes.thermo.dryer import size_dryer
+    from co2routes.thermo.errors import InputError
 
     inp, notes = dryer_input(result, plan, site)
     warnings = list(notes)

@@ -1,8 +1,8 @@
 """Delivery: from dry gas at the site to the scenario's end product (gas, liquid or dry ice).
 
 For a liquid end product the dry gas is compressed in stages and condensed at the scenario's
-condensing temperature (:func:`thermo.compression.liquefy`). For dry ice the liquid is then
-flashed to 1 atm (:func:`thermo.flash.flash_at_temperature`); only the solid fraction becomes dry
+condensing temperature (:func:`co2routes.thermo.compression.liquefy`). For dry ice the liquid is then
+flashed to 1 atm (:func:`co2routes.thermo.flash.flash_at_temperature`); only the solid fraction becomes dry
 ice and the flash gas is vented, not recompressed (a simple rig; a recycle would need a second
 compressor), so each kg of dry ice takes ``1 / solid_fraction`` kg of raw CO2.
 
@@ -15,9 +15,9 @@ from dataclasses import dataclass
 from functools import lru_cache
 from typing import Any
 
-from sources.base import Site
-from thermo import cautions
-from thermo.errors import InputError
+from co2routes.sources.base import Site
+from co2routes.thermo import cautions
+from co2routes.thermo.errors import InputError
 
 #: Electric motor efficiency of a small compressor drive (common practice for fractional to
 #: few-kW induction motors: 0.75-0.90; IEC 60034-30-1 IE2/IE3 classes sit near 0.80-0.85 at 1 kW).
@@ -48,7 +48,7 @@ class Delivery:
 def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, site: Site) -> tuple[float, Any | None]:
     """kg of CO2 a route must deliver for ``product_kg`` of end product, and the flash used.
 
-    >>> from sources.scenario import DeliveryPlan
+    >>> from co2routes.sources.scenario import DeliveryPlan
     >>> raw_co2_needed(2.0, "gas", "raw-gas", DeliveryPlan(), Site())
     (2.0, None)
     """
@@ -57,7 +57,7 @@ def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, sit
     made_kg = product_kg + storage_loss_kg(plan, site)
     if delivers == "dry-ice":
         return made_kg, None
-    from thermo.dryice import draw_yield, raw_per_dry_ice
+    from co2routes.thermo.dryice import draw_yield, raw_per_dry_ice
 
     # bought gas comes as a liquid cylinder at the site's temperature; made gas is condensed at
     # the condensing temperature; either way the liquid is drawn from the bottom (dip tube)
@@ -69,10 +69,10 @@ def raw_co2_needed(product_kg: float, end_product: str, delivers: str, plan, sit
 def storage_loss_kg(plan, site: Site) -> float:
     """Dry ice that sublimes in the insulated box between making (or delivery) and use [kg].
 
-    m = U A (T_site - 194.7 K) t / dH_sub (:func:`thermo.dryice.storage_loss`); zero when the
+    m = U A (T_site - 194.7 K) t / dH_sub (:func:`co2routes.thermo.dryice.storage_loss`); zero when the
     scenario holds the dry ice for no time.
 
-    >>> from sources.scenario import DeliveryPlan
+    >>> from co2routes.sources.scenario import DeliveryPlan
     >>> storage_loss_kg(DeliveryPlan(), Site())
     0.0
     >>> round(storage_loss_kg(DeliveryPlan(hold_time_s=86400.0), Site(temperature_k=293.15)), 2)
@@ -80,13 +80,13 @@ def storage_loss_kg(plan, site: Site) -> float:
     """
     if plan.hold_time_s <= 0.0:
         return 0.0
-    from thermo.dryice import storage_loss
+    from co2routes.thermo.dryice import storage_loss
 
     loss = storage_loss(plan.box_area_m2, plan.box_u_w_m2_k, site.temperature_k)
     return loss.loss_rate_kg_s * plan.hold_time_s
 
 
-#: thermo.compression's field names -> the scenario keys they come from.
+#: co2routes.thermo.compression's field names -> the scenario keys they come from.
 _PLAN_FIELDS = {
     "condensing temperature": "delivery.condensing_temperature",
     "stages": "delivery.stages",
@@ -103,7 +103,7 @@ _PLAN_FIELDS = {
 def _liquefy(pressure_pa: float, temperature_k: float, plan):
     """Compression per kg from the site's state under ``plan`` (the same for every route, so
     computed once per scenario; the batch time is the mass over ``mass_flow_kg_s``)."""
-    from thermo.compression import liquefy
+    from co2routes.thermo.compression import liquefy
 
     return liquefy(pressure_pa, temperature_k, plan.condensing_temperature_k,
                    stages=plan.stages, efficiency=plan.efficiency,

@@ -13,9 +13,9 @@ from importlib import resources
 from pathlib import Path
 from typing import Any, Iterable, Mapping
 
-from sources.base import CostLine, Reagent, Use
-from thermo.errors import InputError
-from thermo.units import parse, registry
+from co2routes.sources.base import CostLine, Reagent, Use
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.units import parse, registry
 
 #: dimensions a price may be per, with the SI unit it is normalised to.
 _PER = {"mass": "kilogram", "volume": "meter ** 3", "energy": "joule"}
@@ -64,7 +64,7 @@ def parse_price(key: str, raw: Any, where: str = "prices") -> Price:
     >>> parse_price("water", "3 / K")
     Traceback (most recent call last):
     ...
-    thermo.errors.InputError: prices.water: must be 'AMOUNT / UNIT' with a unit of mass, volume or energy, e.g. '1.20 / kg', '0.30 / kWh', '2.5 / L' (got '3 / K')
+    co2routes.thermo.errors.InputError: prices.water: must be 'AMOUNT / UNIT' with a unit of mass, volume or energy, e.g. '1.20 / kg', '0.30 / kWh', '2.5 / L' (got '3 / K')
     """
     field = f"{where}.{key}"
     strength = None
@@ -111,7 +111,7 @@ def _book_from_toml(data: Mapping[str, Any], where: str) -> PriceBook:
 
 def demo_book() -> PriceBook:
     """The shipped book of invented demo prices."""
-    text = resources.files("sources").joinpath("data/prices.toml").read_text(encoding="utf-8")
+    text = resources.files("co2routes.sources").joinpath("data/prices.toml").read_text(encoding="utf-8")
     return _book_from_toml(tomllib.loads(text), "demo price book")
 
 

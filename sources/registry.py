@@ -15,8 +15,8 @@ from dataclasses import dataclass
 from functools import lru_cache
 from importlib.metadata import entry_points
 
-from sources.base import Route
-from thermo.errors import InputError
+from co2routes.sources.base import Route
+from co2routes.thermo.errors import InputError
 
 GROUP = "co2routes.sources"
 

@@ -20,7 +20,7 @@ Schema (every quantity a string with units)::
     [weights]   cost, energy, time, heat, water, purity, hazard (numbers >= 0)
     [options.ROUTE-ID]  KEY = "VALUE" for that route's options
     [prices]    KEY = "AMOUNT / UNIT" overriding the price book
-    [uncertain] "INPUT" = {dist = ..., ...}: spreads for what-if analysis (sources.whatif)
+    [uncertain] "INPUT" = {dist = ..., ...}: spreads for what-if analysis (co2routes.sources.whatif)
 """
 
 from __future__ import annotations
@@ -34,10 +34,10 @@ from importlib import resources
 from pathlib import Path
 from typing import Any, Mapping
 
-from sources.base import Site
-from sources.prices import PriceBook, load_book
-from thermo.errors import InputError
-from thermo.units import parse, parse_positive
+from co2routes.sources.base import Site
+from co2routes.sources.prices import PriceBook, load_book
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.units import parse, parse_positive
 
 END_PRODUCTS = ("gas", "liquid", "dry-ice")
 CRITERIA = ("cost", "energy", "time", "heat", "water", "purity", "hazard")
@@ -268,7 +268,7 @@ def demo_text(which: str = "polytunnel") -> str:
     """The text of a shipped demo scenario (an invented situation, labelled as such)."""
     if which not in DEMOS:
         raise InputError("demo", f"must be one of {', '.join(DEMOS)}", got=repr(which))
-    return resources.files("sources").joinpath(f"data/{DEMOS[which]}").read_text(encoding="utf-8")
+    return resources.files("co2routes.sources").joinpath(f"data/{DEMOS[which]}").read_text(encoding="utf-8")
 
 
 def demo(which: str = "polytunnel", book: PriceBook | None = None) -> Scenario:

@@ -1,13 +1,13 @@
 """One-at-a-time sensitivity of every route's cost per kg: the data of a tornado chart.
 
-For each route, each input that can move its cost (see :func:`sources.whatif.targets`) is set to
+For each route, each input that can move its cost (see :func:`co2routes.sources.whatif.targets`) is set to
 the low and then the high end of its range while every other input stays nominal, and the cost
 per kg is recomputed: prices through the route's price-linear cost lines (exact, no
 re-computation), every other input by evaluating the route again. Inputs are ordered by the width
 of their swing, ``|cost_high - cost_low|``; an input that does not move the cost is left out.
 
 Ranges: the ``[uncertain]`` entry's bounds when the scenario gives one (the 10th and 90th
-percentiles for a normal or lognormal), else the defaults of :data:`sources.whatif.SWINGS`:
+percentiles for a normal or lognormal), else the defaults of :data:`co2routes.sources.whatif.SWINGS`:
 prices x0.75 / x1.25, efficiencies and other fractions -/+ 5 points, temperatures -/+ 5 K, demand
 x0.5 / x2, other quantities x0.75 / x1.25, all kept inside the input's valid range.
 """
@@ -17,12 +17,12 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any, Mapping, Sequence
 
-from sources.base import Route
-from sources.registry import catalogue
-from sources.scenario import Scenario
-from sources.whatif import (SCENARIO_INPUTS, Distribution, Target, cost_model, evaluate_at, price_unit,
+from co2routes.sources.base import Route
+from co2routes.sources.registry import catalogue
+from co2routes.sources.scenario import Scenario
+from co2routes.sources.whatif import (SCENARIO_INPUTS, Distribution, Target, cost_model, evaluate_at, price_unit,
                             targets)
-from thermo.errors import InputError
+from co2routes.thermo.errors import InputError
 
 
 @dataclass(frozen=True, slots=True)

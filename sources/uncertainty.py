@@ -8,7 +8,7 @@ x0.75 .. x1.25 of its book value, and the result says so.
 How a sample's cost is found, without a Python loop per sample:
 
 - **Prices** act exactly: each cost line is its price's amount times a coefficient
-  (:class:`sources.whatif.CostModel`), so a line's cost in sample s is ``cost x P_s / P_nominal``.
+  (:class:`co2routes.sources.whatif.CostModel`), so a line's cost in sample s is ``cost x P_s / P_nominal``.
 - **Other inputs** (efficiencies, temperatures, strengths, demand) are non-linear. Each is
   evaluated through the full route model at ``grid`` points across its distribution (the bounds
   of a uniform or triangular, the 0.1 % .. 99.9 % quantiles of a normal or lognormal, spaced
@@ -31,11 +31,11 @@ from typing import Any, Callable, Mapping, Sequence
 
 import numpy as np
 
-from sources.base import Route
-from sources.registry import catalogue
-from sources.scenario import Scenario
-from sources.whatif import SCENARIO_INPUTS, Distribution, cost_model, evaluate_at, price_keys, targets
-from thermo.errors import InputError
+from co2routes.sources.base import Route
+from co2routes.sources.registry import catalogue
+from co2routes.sources.scenario import Scenario
+from co2routes.sources.whatif import SCENARIO_INPUTS, Distribution, cost_model, evaluate_at, price_keys, targets
+from co2routes.thermo.errors import InputError
 
 #: Grid points per non-price input (the interpolation nodes).
 GRID_POINTS = 9
@@ -77,7 +77,7 @@ class Uncertainty:
 
 def default_distributions(scenario: Scenario, routes: Sequence[Route]) -> dict[str, Distribution]:
     """Every known price the routes use, uniform over x0.75 .. x1.25 of its nominal value."""
-    from sources.compare import evaluate
+    from co2routes.sources.compare import evaluate
 
     out: dict[str, Distribution] = {}
     for route in routes:

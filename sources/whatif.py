@@ -1,7 +1,7 @@
 """What-if inputs: what may vary in a comparison, the distributions a scenario gives them, and a
 route's cost split into price-linear lines.
 
-Shared by :mod:`sources.sensitivity` (one input swung at a time) and :mod:`sources.uncertainty`
+Shared by :mod:`co2routes.sources.sensitivity` (one input swung at a time) and :mod:`co2routes.sources.uncertainty`
 (Monte Carlo over every route at once).
 
 **Inputs** are named by where they live in a scenario:
@@ -39,11 +39,11 @@ from typing import Any, Callable, Mapping, Sequence
 
 import numpy as np
 
-from sources.base import Route, RouteResult, parse_options
-from sources.prices import Price, PriceBook, parse_price, reagent_cost, use_cost
-from sources.scenario import Scenario
-from thermo.errors import InputError
-from thermo.units import DIMENSIONS, parse
+from co2routes.sources.base import Route, RouteResult, parse_options
+from co2routes.sources.prices import Price, PriceBook, parse_price, reagent_cost, use_cost
+from co2routes.sources.scenario import Scenario
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.units import DIMENSIONS, parse
 
 KINDS = ("uniform", "triangular", "normal", "lognormal")
 
@@ -173,7 +173,7 @@ def evaluate_at(route: Route, scenario: Scenario, settings: Mapping[str, float])
 
     Inputs of another route are ignored; price inputs are not allowed here (see :class:`CostModel`).
     """
-    from sources.compare import evaluate
+    from co2routes.sources.compare import evaluate
 
     options: dict[str, str] = {}
     prefix = f"options.{route.id}."
@@ -195,7 +195,7 @@ def evaluate_at(route: Route, scenario: Scenario, settings: Mapping[str, float])
 def price_keys(result: RouteResult) -> tuple[str | None, ...]:
     """The price key of each line of ``result.costs`` (``None`` for a line not from a reagent or use).
 
-    :func:`sources.prices.cost_lines` writes reagents first, then uses, one line each.
+    :func:`co2routes.sources.prices.cost_lines` writes reagents first, then uses, one line each.
     """
     sources_ = [(r.name, r.price_key) for r in result.reagents] + [(u.name, u.price_key) for u in result.uses]
     keys: list[str | None] = []
@@ -382,7 +382,7 @@ def parse_uncertain(scenario: Scenario, source: str = "scenario", text: str | No
     deviation, a lognormal whose mean is not positive, or a price whose unit differs from the
     price book's.
     """
-    from sources.scenario import _Where
+    from co2routes.sources.scenario import _Where
 
     where = _Where(source, text)
     table = scenario.document.get("uncertain", {})
@@ -449,7 +449,7 @@ def _reader(name: str, scenario: Scenario, field: str,
 
 
 def _option_dimension(name: str, field: str, routes: Sequence[Route] | None) -> str:
-    from sources.registry import Catalogue, catalogue
+    from co2routes.sources.registry import Catalogue, catalogue
 
     parts = name.split(".")
     if len(parts) != 3:

@@ -9,7 +9,7 @@ temperature, which the bed and fan estimates here do not resolve.
 
 from __future__ import annotations
 
-from thermo.errors import InputError, require_positive
+from co2routes.thermo.errors import InputError, require_positive
 
 #: Molar mass of dry air [kg/mol] (Lemmon et al. 2000, J. Phys. Chem. Ref. Data 29, 331: 28.9586 g/mol).
 AIR_MOLAR_MASS = 0.0289586
@@ -58,7 +58,7 @@ def air_viscosity(temperature_k: float, pressure_pa: float = 101325.0) -> float:
     185.4
     """
     _check(temperature_k, pressure_pa)
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     return float(coolprop().PropsSI("V", "T", temperature_k, "P", pressure_pa, "Air"))
 

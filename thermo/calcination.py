@@ -1,7 +1,7 @@
 """Equilibrium CO2 pressure over calcite and lime: CaCO3(s) <=> CaO(s) + CO2(g).
 
 K(T) = exp(-dG(T) / (R T)) = p_CO2 / p0, with p0 = 1 bar (the standard pressure of the NASA
-data) and dG(T) = g(CaO) + g(CO2) - g(CaCO3) from :mod:`thermo.species` (NASA polynomials,
+data) and dG(T) = g(CaO) + g(CO2) - g(CaCO3) from :mod:`co2routes.thermo.species` (NASA polynomials,
 McBride, Zehe and Gordon 2002, NASA TP-2002-211556). Above this pressure of CO2 calcite is
 stable; below it, it calcines.
 
@@ -17,8 +17,8 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from thermo import species
-from thermo.errors import InputError
+from co2routes.thermo import species
+from co2routes.thermo.errors import InputError
 
 R = 8.314462618  # J/(mol K), CODATA 2018
 P0 = 1e5  # Pa, standard pressure of the NASA data

@@ -11,7 +11,7 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from thermo.errors import InputError, require_positive
+from co2routes.thermo.errors import InputError, require_positive
 
 #: Triple-point temperature [K] (Span & Wagner 1996, Sec. 3.1).
 TRIPLE_TEMPERATURE_K = 216.592
@@ -88,7 +88,7 @@ _ABOVE_CRITICAL = ("is above the critical point (304.1282 K, 7.3773 MPa): above 
 
 
 def _props(output: str, name1: str, value1: float, name2: str, value2: float) -> float:
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     return float(coolprop().PropsSI(output, name1, value1, name2, value2, _FLUID))
 
@@ -158,7 +158,7 @@ def saturation_at_pressure(pressure_pa: float) -> Saturation:
     if not p <= CRITICAL_PRESSURE_PA:
         raise InputError("pressure", "must be at or below 7.3773 MPa (73.8 bar); it " + _ABOVE_CRITICAL,
                          got=p)
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     cp = coolprop()
     p_triple_eos = cp.PropsSI("ptriple", _FLUID)  # the equation's own triple pressure, 14 Pa higher

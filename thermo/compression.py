@@ -5,7 +5,7 @@ condensing temperature in ``N`` stages of equal pressure ratio. After each stage
 intercooler brings the gas back to the intercooling temperature; after the last stage the
 condenser desuperheats it and condenses it to saturated liquid at the condensing temperature.
 Every state comes from the Span & Wagner (1996) equation of state through CoolProp; the
-saturation pressure comes from :mod:`thermo.co2`.
+saturation pressure comes from :mod:`co2routes.thermo.co2`.
 
 Cooling the receiving cylinder (an ice bath, a chiller) lowers the condensing pressure and so the
 work and the number of stages: :func:`cooling_tradeoff` tabulates that.
@@ -24,8 +24,8 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from thermo._lazy import coolprop
-from thermo.errors import InputError, require_fraction, require_positive
+from co2routes.thermo._lazy import coolprop
+from co2routes.thermo.errors import InputError, require_fraction, require_positive
 
 FLUID = "CO2"
 
@@ -211,7 +211,7 @@ def compress_stage(index: int, suction_pressure_pa: float, suction_temperature_k
     h2_state = CP.PropsSI("H", "P", discharge_pressure_pa, "T", t2, FLUID)
     if cooled_temperature_k is None:
         cooler = "condenser"
-        from thermo.co2 import saturation_at_pressure
+        from co2routes.thermo.co2 import saturation_at_pressure
 
         sat = saturation_at_pressure(discharge_pressure_pa)
         h_out, t_out = sat.liquid_enthalpy_j_kg, sat.temperature_k
@@ -264,13 +264,13 @@ def mass_flow_kg_s(displacement_m3_s: float, volumetric_efficiency: float,
 
 
 def _saturation(temperature_k: float):
-    from thermo import co2
+    from co2routes.thermo import co2
 
     return co2.saturation_at_temperature(temperature_k)
 
 
 def _check_condensing(temperature_k: float, field: str) -> None:
-    from thermo import co2
+    from co2routes.thermo import co2
 
     if temperature_k >= co2.CRITICAL_TEMPERATURE_K:
         raise InputError(
@@ -298,7 +298,7 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
     """Compress CO2 gas in stages and condense it to saturated liquid.
 
     The condensing pressure is the saturation pressure at the condensing temperature
-    (:func:`thermo.co2.saturation_at_temperature`); stage pressures follow
+    (:func:`co2routes.thermo.co2.saturation_at_temperature`); stage pressures follow
     :func:`stage_pressures`; each stage is :func:`compress_stage`. Total work
     ``W = sum(w_i)``, heat rejected ``Q = sum(q_i)``; overall ``W - Q = h_liq(T_c) - h_in``.
 
@@ -339,7 +339,7 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
     require_positive("inlet temperature", inlet_temperature_k)
     require_fraction("efficiency", efficiency)
     _check_condensing(condensing_temperature_k, "condensing temperature")
-    from thermo import co2
+    from co2routes.thermo import co2
 
     p_cond = _saturation(condensing_temperature_k).pressure_pa
     if inlet_pressure_pa >= p_cond:
@@ -500,7 +500,7 @@ def cooling_tradeoff(inlet_pressure_pa: float, inlet_temperature_k: float, *,
 
 def _dew_temperature(pressure_pa: float) -> float | None:
     """Saturation temperature at ``pressure_pa`` [K], or None outside the liquid-vapour range."""
-    from thermo import co2
+    from co2routes.thermo import co2
 
     if not (co2.TRIPLE_PRESSURE_PA <= pressure_pa < co2.CRITICAL_PRESSURE_PA):
         return None
@@ -514,7 +514,7 @@ def _require_vapour(pressure_pa: float, temperature_k: float, field: str) -> Non
         raise InputError(field, f"must be above the dew point {dew - 273.15:.1f} degC at "
                          f"{pressure_pa / 1e5:.2f} bar so the compressor draws gas",
                          got=f"{temperature_k - 273.15:.1f} degC")
-    from thermo import co2
+    from co2routes.thermo import co2
 
     if temperature_k <= co2.TRIPLE_TEMPERATURE_K:
         raise InputError(field, "must be above the triple point, -56.6 degC, where the equation of "

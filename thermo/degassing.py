@@ -1,6 +1,6 @@
 """Gases dissolved in water from a gas mixture, and what a vacuum or warming gives back.
 
-Each gas dissolves by Henry's law, c_i = Hcp_i(T) p_i. CO2 uses :mod:`thermo.henry`; nitrogen,
+Each gas dissolves by Henry's law, c_i = Hcp_i(T) p_i. CO2 uses :mod:`co2routes.thermo.henry`; nitrogen,
 oxygen and argon use the recommended entries of the same compilation (Sander, R. (2015)
 "Compilation of Henry's law constants (version 4.0) for water as solvent", Atmos. Chem. Phys.
 15, 4399; values read at henrys-law.org): N2 6.4e-6 mol/(m3 Pa) and 1300 K (Sander et al. 2011),
@@ -17,8 +17,8 @@ import math
 from dataclasses import dataclass
 from typing import Mapping
 
-from thermo import henry, water
-from thermo.errors import InputError
+from co2routes.thermo import henry, water
+from co2routes.thermo.errors import InputError
 
 #: Hcp at 298.15 K [mol/(m3 Pa)] and d ln Hcp / d(1/T) [K] (Sander 2015; see module docstring).
 OTHER_GASES: dict[str, tuple[float, float]] = {
@@ -31,14 +31,14 @@ OTHER_GASES: dict[str, tuple[float, float]] = {
 def solubility(gas: str, temperature_k: float) -> float:
     """Henry solubility constant Hcp = c / p of ``gas`` in water [mol/(m3 Pa)].
 
-    Hcp(T) = Hcp(298.15 K) exp[B (1/T - 1/298.15 K)]; CO2 through :func:`thermo.henry.henry_constant`.
+    Hcp(T) = Hcp(298.15 K) exp[B (1/T - 1/298.15 K)]; CO2 through :func:`co2routes.thermo.henry.henry_constant`.
 
     Parameters
     ----------
     gas : str
         ``"CO2"``, ``"N2"``, ``"O2"`` or ``"Ar"``.
     temperature_k : float
-        Water temperature [K], within :data:`thermo.henry.T_MIN_K`-:data:`thermo.henry.T_MAX_K`.
+        Water temperature [K], within :data:`co2routes.thermo.henry.T_MIN_K`-:data:`co2routes.thermo.henry.T_MAX_K`.
 
     Source: Sander (2015), Atmos. Chem. Phys. 15, 4399 (entries as in the module docstring).
 

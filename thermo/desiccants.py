@@ -18,7 +18,7 @@ from functools import lru_cache
 from importlib import resources
 from typing import Mapping
 
-from thermo.errors import InputError, require_positive
+from co2routes.thermo.errors import InputError, require_positive
 
 #: Specific gas constant of water [J/(kg K)]: 8.314462618 / 0.018015268 (CODATA R, IAPWS M).
 R_WATER = 461.52
@@ -81,7 +81,7 @@ class Desiccant:
 
 @lru_cache(maxsize=1)
 def _table() -> dict:
-    text = resources.files("thermo").joinpath("data/desiccants.toml").read_text(encoding="utf-8")
+    text = resources.files("co2routes.thermo").joinpath("data/desiccants.toml").read_text(encoding="utf-8")
     return tomllib.loads(text)
 
 
@@ -183,7 +183,7 @@ def equilibrium_loading(desiccant: Desiccant, water_pressure_pa: float, temperat
     0.219
     """
     if desiccant.kind == "deliquescent":
-        from thermo.water import vapor_pressure
+        from co2routes.thermo.water import vapor_pressure
 
         rh = water_pressure_pa / vapor_pressure(temperature_k)
         return desiccant.capacity_kg_per_kg if rh > desiccant.rh_floor else 0.0
@@ -212,7 +212,7 @@ def water_pressure_for_loading(desiccant: Desiccant, loading: float, temperature
     951.0
     """
     if desiccant.kind == "deliquescent":
-        from thermo.water import vapor_pressure
+        from co2routes.thermo.water import vapor_pressure
 
         return desiccant.rh_floor * vapor_pressure(temperature_k)
     require_positive("loading", loading)
@@ -245,12 +245,12 @@ def outlet_floor_pressure(desiccant: Desiccant, temperature_k: float) -> float:
 
     Sources: the rows' ``min_dew_point_k`` (practice values, from memory) and the CaCl2 residual
     water of Bower (1934) and Trusell & Diehl (1963) (from memory); saturation pressures from
-    :mod:`thermo.water` (IAPWS-95, Murphy & Koop 2005).
+    :mod:`co2routes.thermo.water` (IAPWS-95, Murphy & Koop 2005).
 
     >>> round(outlet_floor_pressure(get_desiccant("silica-gel"), 298.15), 2)   # -50 degC frost
     3.94
     """
-    from thermo.water import vapor_pressure
+    from co2routes.thermo.water import vapor_pressure
 
     if desiccant.kind == "deliquescent":
         return desiccant.rh_floor * vapor_pressure(temperature_k)

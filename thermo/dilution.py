@@ -1,7 +1,7 @@
 """Heat of diluting hydrochloric and sulfuric acid, from the published integral-heat tables.
 
 A strong acid bought at 31 % w/w is far from the infinite dilution that the reaction data in
-:mod:`thermo.reaction` assume. Mixing it into water gives heat off: for hydrochloric acid about
+:mod:`co2routes.thermo.reaction` assume. Mixing it into water gives heat off: for hydrochloric acid about
 13 kJ per mol HCl from 31 % to infinite dilution, for sulfuric acid about 70 kJ per mol from 98 % to 20 %.
 This module turns strengths into n (mol water per mol acid) and reads the tables:
 
@@ -29,8 +29,8 @@ from dataclasses import dataclass
 from functools import lru_cache
 from pathlib import Path
 
-from thermo import species
-from thermo.errors import InputError
+from co2routes.thermo import species
+from co2routes.thermo.errors import InputError
 
 _DATA = Path(__file__).with_name("data")
 #: Acids this module knows: name -> (species of the pure acid, species at infinite dilution).

@@ -3,7 +3,7 @@
 Method (one fixed bed, downflow, sized for one adsorption period):
 
 1. Water taken up per cycle from the inlet and outlet water contents (ideal mixing).
-2. Equilibrium loading at the inlet (the desiccant's isotherm, :mod:`thermo.desiccants`) less the
+2. Equilibrium loading at the inlet (the desiccant's isotherm, :mod:`co2routes.thermo.desiccants`) less the
    residual left by regeneration with a purge of product gas (as dry as the bed delivers) at the
    regeneration temperature: the working capacity.
 3. Saturated-zone length from the water load; plus a mass-transfer-zone (MTZ) allowance
@@ -17,7 +17,7 @@ Method (one fixed bed, downflow, sized for one adsorption period):
    reaches 0.33 psi/ft (7.47 kPa/m), the design gradient for downflow beds (GPSA sec. 20, from
    memory); the bed's total drop is checked against 8 psi (Abdel-Aal et al. 2003).
 5. Breakthrough curve: constant-pattern front with linear-driving-force uptake
-   (:func:`thermo.packed_bed.constant_pattern_shape`), its rate constant set so the 5-95 % front
+   (:func:`co2routes.thermo.packed_bed.constant_pattern_shape`), its rate constant set so the 5-95 % front
    spans the MTZ; the bed is lengthened if the outlet would pass the target before the cycle ends.
 6. Regeneration heat: desiccant and held water heated to the regeneration temperature, plus the
    heat of adsorption of the water load (vessel, purge and losses not counted).
@@ -32,14 +32,14 @@ import math
 from dataclasses import dataclass, field
 from typing import Mapping
 
-from thermo import water
-from thermo.co2 import ATMOSPHERE_PA, MOLAR_MASS as CO2_MOLAR_MASS
-from thermo.desiccants import (DESICCANT_IDS, Desiccant, defaults, equilibrium_loading,
+from co2routes.thermo import water
+from co2routes.thermo.co2 import ATMOSPHERE_PA, MOLAR_MASS as CO2_MOLAR_MASS
+from co2routes.thermo.desiccants import (DESICCANT_IDS, Desiccant, defaults, equilibrium_loading,
                                extrapolation_warning, get_desiccant, outlet_limit,
                                suggest_desiccant)
-from thermo.errors import InputError, require_positive
-from thermo.gasmix import gas_state, normalise
-from thermo.packed_bed import (constant_pattern_shape, ergun_gradient, ergun_velocity, interpolate,
+from co2routes.thermo.errors import InputError, require_positive
+from co2routes.thermo.gasmix import gas_state, normalise
+from co2routes.thermo.packed_bed import (constant_pattern_shape, ergun_gradient, ergun_velocity, interpolate,
                                mtz_length)
 
 #: Beverage-grade CO2 moisture limit [ppm v/v]: ISBT quality guidelines (REFERENCES, R).
@@ -144,7 +144,7 @@ def inlet_ppmv(inp: DryerInput) -> float:
     """Inlet water [ppmv] from whichever inlet field of ``inp`` is set (saturated when none).
 
     ppmv = 1e6 RH p_sat(T)/P, 1e6 p_sat(T_dp)/P, as given, or 1e6 p_sat(T)/P (saturated); p_sat
-    from :mod:`thermo.water` (IAPWS-95; Murphy & Koop 2005 below 0 degC).
+    from :mod:`co2routes.thermo.water` (IAPWS-95; Murphy & Koop 2005 below 0 degC).
 
     >>> round(inlet_ppmv(DryerInput(1e-5, 298.15, inlet_relative_humidity=0.5)))
     15642
@@ -398,7 +398,7 @@ def _notes(d: Desiccant, rh_in: float) -> list[str]:
 
 
 def _cautions(d: Desiccant, pressure_pa: float) -> tuple[str, ...]:
-    from thermo import cautions as c
+    from co2routes.thermo import cautions as c
 
     found = [c.ASPHYXIATION, c.DESICCANT if d.regenerable else c.DELIQUESCENT_SALT]
     if pressure_pa > 1.5 * ATMOSPHERE_PA:
@@ -411,7 +411,7 @@ def breakthrough_curve(inp: DryerInput, result: DryerResult | None = None,
     """Outlet water [ppmv] against time for the bed of ``result`` (sized from ``inp`` if absent).
 
     c_out(t) = c_floor + x(t) (c_in - c_floor), where x(t) is the constant-pattern LDF front of
-    :func:`thermo.packed_bed.constant_pattern_shape`: k (t - t_s) = G(x) - mean G, with
+    :func:`co2routes.thermo.packed_bed.constant_pattern_shape`: k (t - t_s) = G(x) - mean G, with
     t_s = L rho_b A dq / m_water the stoichiometric time and k the rate that makes the 5-95 %
     front span the mass-transfer zone.
 

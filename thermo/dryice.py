@@ -1,6 +1,6 @@
 """Dry ice from a liquid CO2 cylinder: which side to draw from, what storage loses, raw CO2 per kg.
 
-The flash of a saturated phase released to 1 atm is the energy balance of :mod:`thermo.flash`
+The flash of a saturated phase released to 1 atm is the energy balance of :mod:`co2routes.thermo.flash`
 (isenthalpic expansion to solid + vapour at the 1 atm sublimation point 194.686 K):
 
     x = (h_v(194.686 K, 1 atm) - h_in) / Delta H_sub
@@ -13,14 +13,14 @@ clipped at 0: the gas simply leaves colder), 2.7 % at 20 degC against 29 % for t
 
 Storage loss in an insulated box: the heat leak sublimes the ice,
 ``m_dot = U A (T_amb - T_s) / Delta H_sub`` with T_s = 194.686 K and Delta H_sub = 573.3 kJ/kg
-(Giauque & Egan 1937, J. Chem. Phys. 5, 45), both taken from :mod:`thermo.flash` / :mod:`thermo.co2`.
+(Giauque & Egan 1937, J. Chem. Phys. 5, 45), both taken from :mod:`co2routes.thermo.flash` / :mod:`co2routes.thermo.co2`.
 """
 
 from __future__ import annotations
 
 from dataclasses import dataclass
 
-from thermo.errors import InputError, require_fraction, require_positive
+from co2routes.thermo.errors import InputError, require_fraction, require_positive
 
 #: The two ways of taking CO2 from a liquid cylinder.
 DRAWS = ("liquid", "vapor")
@@ -86,7 +86,7 @@ def draw_yield(cylinder_temperature_k: float, draw: str = "liquid",
     """Dry-ice fraction of CO2 drawn from the liquid side or the vapour side of a cylinder.
 
     Equation: ``x = max(0, (h_v(194.686 K, 1 atm) - h_sat(T)) / Delta H_sub)``, with ``h_sat`` the
-    saturated liquid (``draw="liquid"``, via :func:`thermo.flash.flash_at_temperature`) or
+    saturated liquid (``draw="liquid"``, via :func:`co2routes.thermo.flash.flash_at_temperature`) or
     saturated vapour (``draw="vapor"``) enthalpy at the cylinder temperature.
 
     Parameters
@@ -99,12 +99,12 @@ def draw_yield(cylinder_temperature_k: float, draw: str = "liquid",
         Mass drawn [kg].
 
     Sources: Span & Wagner (1996) saturated enthalpies; Giauque & Egan (1937) Delta H_sub =
-    573.3 kJ/kg; the 1 atm vapour enthalpy of :func:`thermo.flash.vapor_enthalpy_at_sublimation_point`.
+    573.3 kJ/kg; the 1 atm vapour enthalpy of :func:`co2routes.thermo.flash.vapor_enthalpy_at_sublimation_point`.
 
     >>> round(draw_yield(293.15, "liquid").solid_fraction, 2), draw_yield(273.15, "vapor").solid_fraction
     (0.29, 0.0)
     """
-    from thermo import co2, flash
+    from co2routes.thermo import co2, flash
 
     if draw not in DRAWS:
         raise InputError("draw", "must be 'liquid' or 'vapor'", got=draw)
@@ -153,7 +153,7 @@ def storage_loss(area_m2: float, u_w_m2_k: float, ambient_temperature_k: float, 
     >>> round(r.heat_leak_w, 2), round(r.loss_kg_per_day, 2)
     (49.23, 7.42)
     """
-    from thermo import co2, flash
+    from co2routes.thermo import co2, flash
 
     a = require_positive("box area", area_m2)
     u = require_positive("box U", u_w_m2_k)
@@ -189,7 +189,7 @@ def raw_per_dry_ice(solid_fraction: float, *, transfer_loss_fraction: float = 0.
     storage_loss_fraction : float
         Share of the dry ice sublimed before use, [0, 1).
     liquefaction_work_j_per_kg : float or None
-        Compression work per kg of liquid [J/kg] (:attr:`thermo.compression.LiquefactionResult.work_j_per_kg`).
+        Compression work per kg of liquid [J/kg] (:attr:`co2routes.thermo.compression.LiquefactionResult.work_j_per_kg`).
 
     Source: mass balance; the flash fraction from Span & Wagner (1996) and Giauque & Egan (1937).
 

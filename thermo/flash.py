@@ -28,14 +28,14 @@ from __future__ import annotations
 from dataclasses import dataclass
 from functools import lru_cache
 
-from thermo.co2 import (
+from co2routes.thermo.co2 import (
     ATMOSPHERE_PA,
     NORMAL_SUBLIMATION_K,
     TRIPLE_TEMPERATURE_K,
     saturation_at_pressure,
     saturation_at_temperature,
 )
-from thermo.errors import require_positive
+from co2routes.thermo.errors import require_positive
 
 #: Enthalpy of sublimation of CO2 at 194.67 K and 1 atm [J/kg] (Giauque & Egan 1937:
 #: 25.23 kJ/mol, divided by 44.0095 g/mol).
@@ -76,7 +76,7 @@ def vapor_enthalpy_at_sublimation_point() -> float:
     """
     import numpy as np
 
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     cp = coolprop()
     state = cp.AbstractState("HEOS", "CO2")

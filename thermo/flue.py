@@ -6,10 +6,10 @@ mixture; the exhaust cooled back to the site temperature is the constant-tempera
 equilibrium of the same atoms, which is complete combustion to CO2 and H2O: the carbon monoxide
 and nitric oxide a real burner leaves are kinetic, not equilibrium, and are reported at the
 flame only (an upper figure for what the flame can make). Water above saturation at the site
-temperature condenses (vapour pressure from :mod:`thermo.water`).
+temperature condenses (vapour pressure from :mod:`co2routes.thermo.water`).
 
 Species thermochemistry: NASA polynomials in Cantera's ``nasa_gas.yaml`` (McBride, Zehe and
-Gordon 2002, NASA TP-2002-211556); liquid water and liquid ethanol from :mod:`thermo.species`.
+Gordon 2002, NASA TP-2002-211556); liquid water and liquid ethanol from :mod:`co2routes.thermo.species`.
 Dry air: N2 0.78084, O2 0.209476, Ar 0.00934 mol/mol (U.S. Standard Atmosphere 1976, Table 3),
 with the CO2 given in place of the standard's 314 ppm and the three scaled to fill the rest.
 
@@ -24,9 +24,9 @@ from dataclasses import dataclass
 from functools import lru_cache
 from typing import Mapping
 
-from thermo import species, water
-from thermo._lazy import cantera
-from thermo.errors import InputError, require_positive
+from co2routes.thermo import species, water
+from co2routes.thermo._lazy import cantera
+from co2routes.thermo.errors import InputError, require_positive
 
 #: Dry air without CO2 [mol/mol] (U.S. Standard Atmosphere 1976, Table 3); scaled to fill 1 - x_CO2.
 DRY_AIR = {"N2": 0.78084, "O2": 0.209476, "Ar": 0.00934}
@@ -188,7 +188,7 @@ def heating_values(fuel: str) -> tuple[float, float]:
     fuel : str
         One of :data:`FUELS`.
 
-    Sources: NASA polynomials (McBride et al. 2002); liquids per :mod:`thermo.species`. NIST
+    Sources: NASA polynomials (McBride et al. 2002); liquids per :mod:`co2routes.thermo.species`. NIST
     WebBook standard enthalpies of combustion agree within 0.1 % (see tests).
 
     >>> round(heating_values("methane")[1] / 1e6, 2)
@@ -240,7 +240,7 @@ def burn(fuel: str, excess_air: float, temperature_k: float = 293.15,
         CO2 in the combustion air [mol/mol], 0-5 %.
 
     Sources: NASA polynomials (McBride et al. 2002) and Cantera's Gibbs minimiser; air per
-    :func:`air_fractions`; water vapour pressure IAPWS-95 (:mod:`thermo.water`).
+    :func:`air_fractions`; water vapour pressure IAPWS-95 (:mod:`co2routes.thermo.water`).
 
     >>> c = burn("propane", 0.15)
     >>> round(c.co2_kg_per_kg_fuel, 3), round(c.flame_temperature_k)

@@ -12,7 +12,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Mapping
 
-from thermo.errors import InputError, require_positive
+from co2routes.thermo.errors import InputError, require_positive
 
 #: Species a composition may name: CoolProp fluid name and molar mass [kg/mol] (NIST WebBook).
 SPECIES: dict[str, tuple[str, float]] = {
@@ -87,8 +87,8 @@ def gas_state(temperature_k: float, pressure_pa: float, composition: Mapping[str
     >>> round(g.density_kg_m3, 3), round(g.viscosity_pa_s * 1e6, 2)
     (1.808, 14.91)
     """
-    from thermo._lazy import coolprop
-    from thermo.packed_bed import wilke_viscosity
+    from co2routes.thermo._lazy import coolprop
+    from co2routes.thermo.packed_bed import wilke_viscosity
 
     cp = coolprop()
     t = require_positive("temperature", temperature_k)

@@ -15,7 +15,7 @@ from __future__ import annotations
 
 import math
 
-from thermo.errors import InputError, require_positive
+from co2routes.thermo.errors import InputError, require_positive
 
 #: Henry solubility constant of CO2 in water at 298.15 K [mol/(m3 Pa)] (Sander 2015, CO2 entry).
 HCP_298_MOL_M3_PA = 3.3e-4

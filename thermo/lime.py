@@ -5,17 +5,17 @@ CaO + CO2 -> CaCO3) and gives it back, pure, in a kiln (CaCO3 -> CaO + CO2); qui
 back to hydroxide with water (CaO + H2O -> Ca(OH)2). Each pass through the kiln sinters the lime
 a little, so the share of the calcium that carbonates falls with the number of cycles.
 
-Reaction enthalpies come from :mod:`thermo.reaction` and sensible heats from the species data of
-:mod:`thermo.species` (NASA polynomials, McBride, Zehe and Gordon 2002; NBS, Wagman et al. 1982).
+Reaction enthalpies come from :mod:`co2routes.thermo.reaction` and sensible heats from the species data of
+:mod:`co2routes.thermo.species` (NASA polynomials, McBride, Zehe and Gordon 2002; NBS, Wagman et al. 1982).
 """
 
 from __future__ import annotations
 
 from dataclasses import dataclass
 
-from thermo import species
-from thermo.errors import InputError, require_fraction
-from thermo.reaction import parse_reaction
+from co2routes.thermo import species
+from co2routes.thermo.errors import InputError, require_fraction
+from co2routes.thermo.reaction import parse_reaction
 
 #: Deactivation constant k and residual conversion X_r of the cycle-decay equation (Grasa &
 #: Abanades 2006; their fit to natural limestones over up to 500 cycles; the residual "about 7-8 %"
@@ -99,7 +99,7 @@ def kiln_heat(sorbent: str, conversion: float, ambient_k: float, calcination_k: 
         Kiln temperature [K], 700-1200 K (the calcite data end at 1200 K).
 
     Sources: reaction enthalpies and sensible heats from NASA polynomials (McBride et al. 2002)
-    through :mod:`thermo.species`; at 298.15 K, dH_calc = +178.3 kJ/mol against +178.32 from the
+    through :mod:`co2routes.thermo.species`; at 298.15 K, dH_calc = +178.3 kJ/mol against +178.32 from the
     NBS tables (Wagman et al. 1982).
 
     >>> q = kiln_heat("CaO(s)", 1.0, 298.15, 1167.0)
@@ -127,7 +127,7 @@ def kiln_heat(sorbent: str, conversion: float, ambient_k: float, calcination_k: 
 def reaction_heat(equation: str, temperature_k: float) -> float:
     """Enthalpy of one of this module's reactions [J per mol as written] at ``temperature_k``.
 
-    Source: :meth:`thermo.reaction.Reaction.delta_h` (NBS / NASA data).
+    Source: :meth:`co2routes.thermo.reaction.Reaction.delta_h` (NBS / NASA data).
 
     >>> round(reaction_heat(SLAKING, 298.15) / 1000, 1)
     -65.2

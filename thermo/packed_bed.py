@@ -9,7 +9,7 @@ from __future__ import annotations
 import math
 from typing import Callable, Sequence
 
-from thermo.errors import InputError, require_fraction, require_positive
+from co2routes.thermo.errors import InputError, require_fraction, require_positive
 
 
 def ergun_gradient(particle_diameter_m: float, voidage: float, superficial_velocity_m_s: float,

@@ -3,7 +3,7 @@
 ``parse_reaction("NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)")`` reads the equation
 (coefficients as ``2 HCl(aq)`` or ``2HCl(aq)``, arrow ``->`` or ``=``), refuses one whose elements
 do not balance, and returns a :class:`Reaction` whose :meth:`Reaction.delta_h` is the standard
-enthalpy of reaction from the species data in :mod:`thermo.species`.
+enthalpy of reaction from the species data in :mod:`co2routes.thermo.species`.
 
 >>> r = reaction_enthalpy("NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)")
 >>> round(r.delta_h_kj_per_mol, 1), round(r.delta_h_kj_per_kg_co2)
@@ -16,8 +16,8 @@ import re
 from dataclasses import dataclass
 from fractions import Fraction
 
-from thermo import species
-from thermo.errors import InputError
+from co2routes.thermo import species
+from co2routes.thermo.errors import InputError
 
 FIELD = "equation"
 #: Below this many atoms an element counts as balanced (coefficients are exact fractions, so
@@ -57,7 +57,7 @@ class Reaction:
         """Standard enthalpy of reaction [J per mol of reaction as written].
 
         dH(T) = sum over products of nu h_i(T) - sum over reactants of nu h_i(T), with h_i the
-        absolute molar enthalpy of :func:`thermo.species.enthalpy` (formation enthalpy at
+        absolute molar enthalpy of :func:`co2routes.thermo.species.enthalpy` (formation enthalpy at
         298.15 K plus sensible heat). Negative: the reaction gives heat off.
 
         Parameters
@@ -67,7 +67,7 @@ class Reaction:
             (aqueous species and most solids: 273.15-373.15 K).
 
         Aqueous species are at infinite dilution; the heat of diluting a strong acid to that
-        state is in :mod:`thermo.dilution`. Source: NBS tables (Wagman et al. 1982) and NASA
+        state is in :mod:`co2routes.thermo.dilution`. Source: NBS tables (Wagman et al. 1982) and NASA
         polynomials (McBride et al. 2002) through the species data.
 
         >>> round(parse_reaction("CaCO3(s) -> CaO(s) + CO2(g)").delta_h() / 1000, 1)
@@ -131,7 +131,7 @@ def parse_reaction(text: str) -> Reaction:
 
     Grammar: ``side ARROW side``; ARROW is ``->``, ``=>``, ``→`` or ``=``; a side is terms joined
     by ``+``; a term is an optional coefficient (``2``, ``0.5``, ``1/2``) and a species name in
-    user notation (see :func:`thermo.species.canonical`). Repeated species are summed.
+    user notation (see :func:`co2routes.thermo.species.canonical`). Repeated species are summed.
 
     Raises
     ------
@@ -144,7 +144,7 @@ def parse_reaction(text: str) -> Reaction:
     >>> parse_reaction("NaHCO3(s) + HCl(aq) -> NaCl(aq) + CO2(g)")
     Traceback (most recent call last):
     ...
-    thermo.errors.InputError: equation: does not balance: H 2 more on the left, O 1 more on the left (got 'NaHCO3(s) + HCl(aq) -> NaCl(aq) + CO2(g)')
+    co2routes.thermo.errors.InputError: equation: does not balance: H 2 more on the left, O 1 more on the left (got 'NaHCO3(s) + HCl(aq) -> NaCl(aq) + CO2(g)')
     """
     raw = " ".join(str(text).split())
     parts = _ARROW.split(raw)

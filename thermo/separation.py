@@ -19,7 +19,7 @@ from __future__ import annotations
 
 import math
 
-from thermo.errors import InputError, require_fraction
+from co2routes.thermo.errors import InputError, require_fraction
 
 #: Molar gas constant [J/(mol K)] (CODATA 2018).
 R = 8.314462618

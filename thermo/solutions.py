@@ -20,7 +20,7 @@ from dataclasses import dataclass
 from functools import lru_cache
 from pathlib import Path
 
-from thermo.errors import InputError
+from co2routes.thermo.errors import InputError
 
 DATA_FILE = Path(__file__).with_name("data") / "solution_density_20c.csv"
 #: Solute names accepted, with the label used in messages.

@@ -22,8 +22,8 @@ from dataclasses import dataclass
 from functools import lru_cache
 from pathlib import Path
 
-from thermo._lazy import cantera
-from thermo.errors import InputError
+from co2routes.thermo._lazy import cantera
+from co2routes.thermo.errors import InputError
 
 DATA_FILE = Path(__file__).with_name("data") / "species.yaml"
 

@@ -1,7 +1,7 @@
 """Storing CO2: the safe charge of a cylinder, its pressure on a hot day, and filling from a buffer.
 
-Vessel states come from :mod:`thermo.co2` (Span & Wagner 1996 through CoolProp). The mass a gas
-buffer holds at (P, T) is :func:`thermo.co2.vessel_by_pressure`; this module adds what a user
+Vessel states come from :mod:`co2routes.thermo.co2` (Span & Wagner 1996 through CoolProp). The mass a gas
+buffer holds at (P, T) is :func:`co2routes.thermo.co2.vessel_by_pressure`; this module adds what a user
 needs to decide whether a charge is safe and how much a buffer can pass on.
 
 Limits:
@@ -21,7 +21,7 @@ from __future__ import annotations
 
 from dataclasses import dataclass
 
-from thermo.errors import InputError, require_positive
+from co2routes.thermo.errors import InputError, require_positive
 
 PSI = 6894.757293168361
 #: Filling density for CO2 in high-pressure cylinders [kg/L of water capacity] (49 CFR 173.304a).
@@ -46,7 +46,7 @@ TRANSFER_ASSUMPTION = (
 class CurvePoint:
     """One temperature on a charged cylinder's pressure curve.
 
-    ``phase`` and ``liquid_volume_fraction`` as in :class:`thermo.co2.VesselState`.
+    ``phase`` and ``liquid_volume_fraction`` as in :class:`co2routes.thermo.co2.VesselState`.
     """
 
     temperature_k: float
@@ -131,7 +131,7 @@ def liquid_full_temperature_k(fill_density_kg_m3: float) -> float | None:
     fill_density_kg_m3 : float
         CO2 mass per internal volume [kg/m3].
 
-    Source: Span & Wagner (1996) J. Phys. Chem. Ref. Data 25, 1509 (through :mod:`thermo.co2`).
+    Source: Span & Wagner (1996) J. Phys. Chem. Ref. Data 25, 1509 (through :mod:`co2routes.thermo.co2`).
 
     >>> round(liquid_full_temperature_k(680.0) - 273.15, 1)
     26.8
@@ -140,7 +140,7 @@ def liquid_full_temperature_k(fill_density_kg_m3: float) -> float | None:
     """
     from scipy.optimize import brentq
 
-    from thermo import co2
+    from co2routes.thermo import co2
 
     rho = require_positive("fill density", fill_density_kg_m3)
 
@@ -201,7 +201,7 @@ def hot_day_curve(volume_m3: float, mass_kg: float, *,
                   ) -> HotDayCurve:
     """Pressure of a charged cylinder from a cold day to a hot day.
 
-    At each temperature the state is :func:`thermo.co2.vessel_by_mass` (fixed mass and volume):
+    At each temperature the state is :func:`co2routes.thermo.co2.vessel_by_mass` (fixed mass and volume):
     two-phase at ``p_sat(T)`` while liquid and vapour share the cylinder, then ``P(rho, T)`` once
     it is liquid-full or supercritical, where pressure rises steeply. Crossing temperatures of the
     rated and relief pressures are found by root-finding on the same state.
@@ -215,7 +215,7 @@ def hot_day_curve(volume_m3: float, mass_kg: float, *,
     low_k, high_k, step_k : float
         Temperature range and step [K]; default -10 degC to 55 degC in 5 K.
 
-    Source: Span & Wagner (1996) via :mod:`thermo.co2`; 55 degC hot day (common practice).
+    Source: Span & Wagner (1996) via :mod:`co2routes.thermo.co2`; 55 degC hot day (common practice).
 
     >>> c = hot_day_curve(0.001, 0.68)
     >>> round(c.hot_day_pressure_pa / 1e5, 1), round(c.liquid_full_temperature_k - 273.15, 1)
@@ -223,7 +223,7 @@ def hot_day_curve(volume_m3: float, mass_kg: float, *,
     """
     from scipy.optimize import brentq
 
-    from thermo import co2
+    from co2routes.thermo import co2
 
     require_positive("volume", volume_m3)
     require_positive("mass", mass_kg)
@@ -289,7 +289,7 @@ def transfer_from_buffer(buffer_volume_m3: float, buffer_pressure_pa: float,
     cylinder holds gas. If the cylinder is colder than the critical point and ``P_f`` would pass
     ``p_sat(T_r)``, gas condenses in it: the pressure stays at ``p_sat(T_r)`` and the cylinder takes
     ``m_b0 + m_r0 - rho(p_sat, T_r) V_b`` (liquid under vapour). Densities from Span & Wagner (1996)
-    via :mod:`thermo.co2`.
+    via :mod:`co2routes.thermo.co2`.
 
     Parameters
     ----------
@@ -308,7 +308,7 @@ def transfer_from_buffer(buffer_volume_m3: float, buffer_pressure_pa: float,
     """
     from scipy.optimize import brentq
 
-    from thermo import co2
+    from co2routes.thermo import co2
 
     t_b = buffer_temperature_k
     t_r = t_b if receiver_temperature_k is None else receiver_temperature_k

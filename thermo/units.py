@@ -17,7 +17,7 @@ from __future__ import annotations
 import math
 from functools import lru_cache
 
-from thermo.errors import InputError
+from co2routes.thermo.errors import InputError
 
 #: The dimensions a field may ask for, with the SI unit the value is returned in and the
 #: pint dimensionality it must have. "fraction" is dimensionless (``31 %`` -> 0.31).

@@ -18,8 +18,8 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from thermo.co2 import ATMOSPHERE_PA, MOLAR_MASS as CO2_MOLAR_MASS
-from thermo.errors import InputError, require_positive
+from co2routes.thermo.co2 import ATMOSPHERE_PA, MOLAR_MASS as CO2_MOLAR_MASS
+from co2routes.thermo.errors import InputError, require_positive
 
 #: Molar mass of water [kg/mol] (IAPWS-95: 18.015268 g/mol, rounded).
 WATER_MOLAR_MASS = 0.018015
@@ -72,7 +72,7 @@ def vapor_pressure_liquid(temperature_k: float) -> float:
         raise InputError(
             "temperature", "liquid water exists from 273.16 K to 647.096 K (triple to critical point)",
             got=temperature_k)
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     return float(coolprop().PropsSI("P", "T", temperature_k, "Q", 0, "Water"))
 
@@ -155,7 +155,7 @@ def dew_point(water_pressure_pa: float) -> float:
             if abs(step) < 1e-10:
                 break
         return min(t, WATER_TRIPLE_K)
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     cp = coolprop()
     p_crit = cp.PropsSI("pcrit", "Water")
@@ -384,7 +384,7 @@ def moisture_from_relative_humidity(temperature_k: float, relative_humidity: flo
     >>> round(m.dew_point_k - 273.15, 2), round(m.water_ppmv)
     (13.86, 15642)
     """
-    from thermo.errors import require_fraction
+    from co2routes.thermo.errors import require_fraction
 
     rh = require_fraction("relative humidity", relative_humidity)
     p_w = rh * vapor_pressure(temperature_k)

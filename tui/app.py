@@ -11,11 +11,11 @@ from typing import Any, Sequence
 from textual.app import App
 from textual.binding import Binding
 
-from tui.screens.dialogs import ConfirmDialog
-from tui.screens.help import KeysScreen, binding_rows
-from tui.screens.main import MainScreen
-from tui.session import Opened, open_demo, open_file
-from tui.widgets.ranking import RankingTable
+from co2routes.tui.screens.dialogs import ConfirmDialog
+from co2routes.tui.screens.help import KeysScreen, binding_rows
+from co2routes.tui.screens.main import MainScreen
+from co2routes.tui.session import Opened, open_demo, open_file
+from co2routes.tui.widgets.ranking import RankingTable
 
 
 class Co2RoutesApp(App[int]):

@@ -1,7 +1,7 @@
 """The ``co2routes`` command line.
 
 With no verb it opens the interface on the demo scenario. Each verb lives in its own module under
-:mod:`tui.commands`; this module only wires them, prints their answer and turns a user's mistake
+:mod:`co2routes.tui.commands`; this module only wires them, prints their answer and turns a user's mistake
 into one line on stderr with exit status 2.
 """
 
@@ -13,9 +13,9 @@ import re
 import sys
 from typing import Sequence
 
-from thermo.errors import InputError
+from co2routes.thermo.errors import InputError
 
-#: The verbs, in the order ``--help`` lists them; each is ``tui.commands.<module>``.
+#: The verbs, in the order ``--help`` lists them; each is ``co2routes.tui.commands.<module>``.
 COMMANDS: tuple[str, ...] = (
     "compare",
     "sensitivity",
@@ -61,7 +61,7 @@ def build_parser() -> argparse.ArgumentParser:
     )
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
     for name in COMMANDS:
-        module = importlib.import_module(f"tui.commands.{name}")
+        module = importlib.import_module(f"co2routes.tui.commands.{name}")
         text = module.HELP.replace("%", "%%")  # argparse %-formats help strings
         p = sub.add_parser(module.NAME, help=text, description=module.HELP)
         module.add_arguments(p)
@@ -78,7 +78,7 @@ def main(argv: Sequence[str] | None = None) -> int:
     args = parser.parse_args(argv)
     if args.command is None:
         return _open_interface(None)
-    from tui.output import emit
+    from co2routes.tui.output import emit
 
     try:
         answer = args._module.run(args)
@@ -94,7 +94,7 @@ def main(argv: Sequence[str] | None = None) -> int:
 def _open_interface(path: str | None) -> int:
     """Open the terminal interface (or, until it exists, show the help)."""
     try:
-        app_module = importlib.import_module("tui.app")
+        app_module = importlib.import_module("co2routes.tui.app")
     except ModuleNotFoundError:
         build_parser().print_help()
         return 0

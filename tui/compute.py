@@ -58,8 +58,8 @@ def outcome(document: Mapping[str, Any], source: str, text: str | None = None,
     when it answers ``False`` (a newer edit has come in) nothing more is done and ``None`` is
     returned.
     """
-    from sources.compare import compare
-    from sources.scenario import validate
+    from co2routes.sources.compare import compare
+    from co2routes.sources.scenario import validate
 
     start = time.perf_counter()
     scenario = validate(document, source, text)
@@ -74,14 +74,14 @@ def demand_sweep(scenario: Any, routes: Sequence[Any] | None = None,
                  proceed: Callable[[], bool] | None = None) -> Sweep | None:
     """Cost per kg of each route when the batch is ``factor`` times the scenario's.
 
-    Each point is a full :func:`sources.compare.compare` of the scenario at that batch size, so
+    Each point is a full :func:`co2routes.sources.compare.compare` of the scenario at that batch size, so
     the chart shows exactly what the ranking would at that demand. A batch size that a route
     refuses gives ``None`` for that route at that point. ``known`` is the comparison at the
     scenario's own size (factor 1), reused rather than worked out again; ``proceed`` is asked
     before each point, and ``False`` stops the sweep (``None`` is returned).
     """
-    from sources.compare import compare
-    from thermo.errors import InputError
+    from co2routes.sources.compare import compare
+    from co2routes.thermo.errors import InputError
 
     sizes = tuple(scenario.co2_kg * f for f in factors)
     costs: dict[str, list[float | None]] = {}
@@ -106,7 +106,7 @@ def demand_sweep(scenario: Any, routes: Sequence[Any] | None = None,
 def saturation_curve(scenario: Any, points: int = 40) -> SaturationCurve:
     """The saturation line with the condensing point and the storage point (a cylinder at the
     site's temperature) marked; for dry ice, the normal sublimation point as well."""
-    from thermo import co2
+    from co2routes.thermo import co2
 
     low, high = co2.TRIPLE_TEMPERATURE_K + 0.01, co2.CRITICAL_TEMPERATURE_K - 0.01
     temps = tuple(low + (high - low) * i / (points - 1) for i in range(points))
@@ -131,12 +131,12 @@ def saturation_curve(scenario: Any, points: int = 40) -> SaturationCurve:
 def breakthrough_points(result: Any, scenario: Any, points: int = 41
                         ) -> tuple[tuple[float, ...], tuple[float, ...], str] | None:
     """The breakthrough curve of the dryer sized for ``result`` as ``(hours, outlet ppmv, label)``,
-    from :func:`thermo.dryer.breakthrough_curve`; ``None`` when the route needs no dryer.
+    from :func:`co2routes.thermo.dryer.breakthrough_curve`; ``None`` when the route needs no dryer.
 
-    The inlet is rebuilt by :func:`sources.conditioning.breakthrough` the way the comparison
+    The inlet is rebuilt by :func:`co2routes.sources.conditioning.breakthrough` the way the comparison
     sized the bed.
     """
-    from sources.conditioning import breakthrough
+    from co2routes.sources.conditioning import breakthrough
 
     curve = breakthrough(result, scenario.dryer, scenario.site, points)
     if curve is None:

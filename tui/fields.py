@@ -1,7 +1,7 @@
 """The fields of the scenario form: which document key each edits, its label and unit hint.
 
 Pure data and conversion, no widgets. A field's text becomes a document value with
-:meth:`Field.to_document`; a wrong value is left for :func:`sources.scenario.validate` to refuse, so
+:meth:`Field.to_document`; a wrong value is left for :func:`co2routes.sources.scenario.validate` to refuse, so
 the message the user sees is the same one the command line prints.
 """
 
@@ -10,7 +10,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any, Iterable, Mapping
 
-from sources.scenario import CRITERIA, END_PRODUCTS
+from co2routes.sources.scenario import CRITERIA, END_PRODUCTS
 
 
 @dataclass(frozen=True, slots=True)

@@ -11,7 +11,7 @@ import json
 import math
 from typing import IO, Any
 
-from thermo.cautions import LOCAL_CODES
+from co2routes.thermo.cautions import LOCAL_CODES
 
 # suffix -> (display unit, factor from SI, offset); checked longest first.
 _SUFFIXES: dict[str, tuple[str, float, float]] = {

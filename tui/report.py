@@ -9,8 +9,8 @@ import csv
 import io
 from typing import Any, Mapping
 
-from sources.compare import Comparison, batch_record, comparison_record
-from thermo.cautions import LOCAL_CODES
+from co2routes.sources.compare import Comparison, batch_record, comparison_record
+from co2routes.thermo.cautions import LOCAL_CODES
 
 #: The comparison's columns: (JSON key, heading, format).
 COLUMNS: tuple[tuple[str, str, str], ...] = (

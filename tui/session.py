@@ -1,8 +1,8 @@
 """The scenario the interface is editing: its document, where it came from, and how it is saved.
 
 No widgets here, so all of it is tested in plain pytest. The document is the TOML as a plain dict
-(see :mod:`sources.scenario`); an edit changes one key of a copy, so a failed edit never touches
-the last good document. Saving goes through :func:`sources.scenario.write_atomic` and refuses to
+(see :mod:`co2routes.sources.scenario`); an edit changes one key of a copy, so a failed edit never touches
+the last good document. Saving goes through :func:`co2routes.sources.scenario.write_atomic` and refuses to
 overwrite a file that changed on disk since it was opened unless the caller says so.
 """
 
@@ -14,8 +14,8 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any, Mapping
 
-from sources.scenario import demo_text, read_document, to_toml, write_atomic
-from thermo.errors import InputError
+from co2routes.sources.scenario import demo_text, read_document, to_toml, write_atomic
+from co2routes.thermo.errors import InputError
 
 
 @dataclass(frozen=True, slots=True)
@@ -162,7 +162,7 @@ def export_format(path: Path | str) -> str:
     >>> export_format("ranking.txt")
     Traceback (most recent call last):
     ...
-    thermo.errors.InputError: ranking.txt: must end in .md, .csv or .json to pick the export format
+    co2routes.thermo.errors.InputError: ranking.txt: must end in .md, .csv or .json to pick the export format
     """
     suffix = Path(path).suffix.lower()
     if suffix not in EXPORT_FORMATS:

@@ -5,7 +5,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any, Mapping
 
-from sources.base import Option
+from co2routes.sources.base import Option
 
 
 @dataclass(frozen=True, slots=True)

@@ -2,10 +2,10 @@
 
 One batch: the carbonate is weighed out and fully used (it is the limiting reagent); the acid is
 given with a small excess so that none of the carbonate is left. Stoichiometry and heat come from
-the core's reaction model (:mod:`thermo.reaction`, species data of :mod:`thermo.species`), the
-heat of diluting a strong acid from :mod:`thermo.dilution`, solution densities from
-:mod:`thermo.solutions`, the CO2 the spent liquor keeps from Henry's law (:mod:`thermo.henry`) and
-the water the gas carries from :mod:`thermo.water`.
+the core's reaction model (:mod:`co2routes.thermo.reaction`, species data of :mod:`co2routes.thermo.species`), the
+heat of diluting a strong acid from :mod:`co2routes.thermo.dilution`, solution densities from
+:mod:`co2routes.thermo.solutions`, the CO2 the spent liquor keeps from Henry's law (:mod:`co2routes.thermo.henry`) and
+the water the gas carries from :mod:`co2routes.thermo.water`.
 
 Model, stated once:
 
@@ -13,7 +13,7 @@ Model, stated once:
   dilution, plus the heat of diluting HCl or H2SO4 from its strength to infinite dilution; the
   small heats of dilution of the salts and of acetic acid are left out;
 * the liquor is adiabatic (the worst case: a real vessel exchanges some heat with the room) with
-  the heat capacity of water (:func:`sources.common.temperature_change`);
+  the heat capacity of water (:func:`co2routes.sources.common.temperature_change`);
 * the gas leaves saturated with water at the final liquor temperature, and the liquor keeps the
   CO2 Henry's law allows at that temperature under the site pressure less the water vapour
   pressure (the gas dissolving gives heat off, the water evaporating takes heat in: both are in
@@ -26,11 +26,11 @@ from __future__ import annotations
 
 from dataclasses import dataclass
 
-from sources.base import (Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use)
-from sources.common import temperature_change, water_g_per_kg_co2
-from sources.routes._options import NamedDefaultOption, settings
-from thermo import cautions
-from thermo.errors import InputError
+from co2routes.sources.base import (Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use)
+from co2routes.sources.common import temperature_change, water_g_per_kg_co2
+from co2routes.sources.routes._options import NamedDefaultOption, settings
+from co2routes.thermo import cautions
+from co2routes.thermo.errors import InputError
 
 #: acid key -> (label, species in the reaction, dilution-table name or None, density-table name,
 #: strength as sold or made up [kg/kg], lowest and highest strength allowed, price key)
@@ -47,7 +47,7 @@ CARBONATES = {
     "calcium-carbonate": ("calcium carbonate chips", "CaCO3(s)"),
     "potassium-bicarbonate": ("potassium bicarbonate", "KHCO3(s)"),
 }
-#: Balanced equations, one per pair (checked by thermo.reaction.parse_reaction when used).
+#: Balanced equations, one per pair (checked by co2routes.thermo.reaction.parse_reaction when used).
 EQUATIONS = {
     ("hcl", "sodium-bicarbonate"): "NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)",
     ("hcl", "sodium-carbonate"): "Na2CO3(s) + 2 HCl(aq) -> 2 NaCl(aq) + H2O(l) + CO2(g)",
@@ -122,8 +122,8 @@ class Batch:
 
 def plan(request: RouteRequest) -> Batch:
     """Size a batch that delivers ``request.co2_kg`` of CO2 gas (see the module notes)."""
-    from thermo import dilution, henry, species, water
-    from thermo.reaction import parse_reaction
+    from co2routes.thermo import dilution, henry, species, water
+    from co2routes.thermo.reaction import parse_reaction
 
     opt = settings(OPTIONS, request.options)
     acid, carbonate = opt["acid"], opt["carbonate"]
@@ -230,7 +230,7 @@ def _mixing_order(acid: str, acid_reagent: Reagent, carbonate_label: str, water_
 def _water_needed(heat_j: float, liquor_kg: float, t_site: float, acid_solution_kg: float,
                   added: float) -> float:
     """Water per kg of acid solution that keeps an adiabatic liquor at 80 degC [kg/kg]."""
-    from sources.common import LIQUOR_CP_J_KG_K
+    from co2routes.sources.common import LIQUOR_CP_J_KG_K
 
     extra = -heat_j / (LIQUOR_CP_J_KG_K * max(353.15 - t_site, 1.0)) - liquor_kg
     return added + max(extra, 0.0) / acid_solution_kg
@@ -238,7 +238,7 @@ def _water_needed(heat_j: float, liquor_kg: float, t_site: float, acid_solution_
 
 def compute(request: RouteRequest) -> RouteResult:
     """Plan one acid-carbonate batch for ``request`` (see the module notes)."""
-    from thermo import solutions, species
+    from co2routes.thermo import solutions, species
 
     opt = settings(OPTIONS, request.options)
     batch = plan(request)

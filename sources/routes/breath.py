@@ -2,7 +2,7 @@
 
 People breathe room air in and out through mouthpieces or a hood; a small fan draws the exhaled
 air (about 4 % CO2, saturated with water near body temperature) through a hydrated-lime bed. The
-bed is released in a kiln exactly as in the lime-sorbent route (:func:`sources.routes.
+bed is released in a kiln exactly as in the lime-sorbent route (:func:`co2routes.sources.routes.
 sorbent_calcination.release`), so the two routes share one release model. The CO2 made per person
 follows Persily & de Jonge (2017). A batch needs enough people for long enough: if the options
 do not suffice, the route says so and counts the hours it would take.
@@ -10,13 +10,13 @@ do not suffice, the route says so and counts the hours it would take.
 
 from __future__ import annotations
 
-from sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
-from sources.common import water_g_per_kg_co2
-from sources.routes.shared import R, kwh, percent, saturated
-from sources.routes.sorbent_calcination import (BED_OPTIONS, KILN_HOURS, M_H2O, RELEASE_OPTIONS, kiln_gas,
+from co2routes.sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
+from co2routes.sources.common import water_g_per_kg_co2
+from co2routes.sources.routes.shared import R, kwh, percent, saturated
+from co2routes.sources.routes.sorbent_calcination import (BED_OPTIONS, KILN_HOURS, M_H2O, RELEASE_OPTIONS, kiln_gas,
                                                 load_bed, release, release_notes, spent_lime)
-from thermo import cautions
-from thermo.co2 import MOLAR_MASS as M_CO2
+from co2routes.thermo import cautions
+from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
 
 #: CO2 in mixed exhaled air, dry basis [mol/mol]: about 4 % at rest (textbook respiratory
 #: physiology, e.g. West, *Respiratory Physiology*; from memory).
@@ -70,7 +70,7 @@ def co2_generation_rate(rq: float, bmr_mj_per_day: float, met: float, temperatur
     >>> round(v * 60, 3), round(n * 0.0440095 * 86400, 3)
     (0.194, 0.55)
     """
-    from thermo.errors import InputError
+    from co2routes.thermo.errors import InputError
 
     if not (0.7 <= rq <= 1.0 and 3.0 <= bmr_mj_per_day <= 15.0 and 0.7 <= met <= 12.0):
         raise InputError("metabolism", "needs RQ 0.7-1.0, BMR 3-15 MJ/day and 0.7-12 MET",
@@ -84,7 +84,7 @@ def exhaled_air(rq: float, air: dict[str, float], pressure_pa: float) -> dict[st
     """Mole fractions of exhaled air saturated at :data:`EXHALED_K`.
 
     Dry basis: CO2 4 %, oxygen lowered by the CO2 / RQ taken up, nitrogen and argon in their air
-    ratio for the rest; then saturated with water (:func:`sources.routes.shared.saturated`).
+    ratio for the rest; then saturated with water (:func:`co2routes.sources.routes.shared.saturated`).
     """
     o2 = air["O2"] - EXHALED_CO2_DRY / rq
     inert = {k: v for k, v in air.items() if k in ("N2", "Ar")}
@@ -102,8 +102,8 @@ class BreathRoute:
 
     def compute(self, request: RouteRequest) -> RouteResult:
         """Plan one batch delivering ``request.co2_kg`` of CO2."""
-        from thermo.flue import air_fractions
-        from thermo.water import vapor_pressure
+        from co2routes.thermo.flue import air_fractions
+        from co2routes.thermo.water import vapor_pressure
 
         opt, site = request.options, request.site
         co2_mol = request.co2_kg / M_CO2

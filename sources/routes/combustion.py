@@ -1,8 +1,8 @@
 """Burn a fuel and take the CO2 from its exhaust (or use the cooled exhaust as it is).
 
-The flue gas comes from a Cantera equilibrium (:func:`thermo.flue.burn`); water above saturation
+The flue gas comes from a Cantera equilibrium (:func:`co2routes.thermo.flue.burn`); water above saturation
 at the site temperature condenses. With ``capture = yes`` the CO2 is separated from the cooled
-flue gas and charged as electricity: the least thermodynamic work (:mod:`thermo.separation`,
+flue gas and charged as electricity: the least thermodynamic work (:mod:`co2routes.thermo.separation`,
 House et al. 2011) divided by a second-law efficiency. With ``capture = no`` the product is the
 cooled flue gas itself, fit only for direct enrichment (a greenhouse), not for drying or
 compression. Fuels are bought: propane, butane and ethanol by the kilogram (reagents), natural
@@ -12,11 +12,11 @@ credit at the price book's ``heat`` price.
 
 from __future__ import annotations
 
-from sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
-from sources.common import normalised, water_g_per_kg_co2
-from sources.routes.shared import YES_NO, kwh, percent, saturated
-from thermo import cautions
-from thermo.co2 import MOLAR_MASS as M_CO2
+from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
+from co2routes.sources.common import normalised, water_g_per_kg_co2
+from co2routes.sources.routes.shared import YES_NO, kwh, percent, saturated
+from co2routes.thermo import cautions
+from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
 
 #: Price-book key, display name and formula of each fuel bought by mass.
 _BOUGHT = {"propane": ("propane", "propane (LPG)"), "butane": ("butane", "butane (LPG)"),
@@ -54,8 +54,8 @@ class CombustionRoute:
 
     def compute(self, request: RouteRequest) -> RouteResult:
         """Plan one batch delivering ``request.co2_kg`` of CO2."""
-        from thermo.flue import burn
-        from thermo.separation import separation_work
+        from co2routes.thermo.flue import burn
+        from co2routes.thermo.separation import separation_work
 
         opt = request.options
         site = request.site

@@ -5,11 +5,11 @@ maltose are first hydrolysed, C12H22O11 + H2O -> 2 C6H12O6. Only a fraction of t
 that equation (option ``efficiency``): the rest goes to glycerol, yeast growth and other by-products
 and is carried here as sugar left in the wash, so that the balances close.
 
-Heat from the reaction model (:mod:`thermo.reaction`): dissolving the sugar, hydrolysing a
+Heat from the reaction model (:mod:`co2routes.thermo.reaction`): dissolving the sugar, hydrolysing a
 disaccharide, then C6H12O6(aq) -> 2 C2H5OH(aq) + 2 CO2(g) (about -101 kJ/mol; "about 24 kcal per
 mol of sugar fermented", Colombie et al. 2007, Biotechnol. Bioeng.), with the CO2 kept dissolved by
-Henry's law at the fermenter temperature (:mod:`thermo.henry`) and the water the gas carries away
-saturated at that temperature (:mod:`thermo.water`).
+Henry's law at the fermenter temperature (:mod:`co2routes.thermo.henry`) and the water the gas carries away
+saturated at that temperature (:mod:`co2routes.thermo.water`).
 
 Time to finish (common practice, not a published kinetic law): a 200 g/L must at 20 degC with an
 ordinary wine or ale yeast ferments out in about 7 days; the time scales with the sugar
@@ -20,11 +20,11 @@ from __future__ import annotations
 
 from dataclasses import dataclass
 
-from sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
-from sources.common import water_g_per_kg_co2
-from sources.routes._options import NamedDefaultOption, settings
-from thermo import cautions
-from thermo.errors import InputError
+from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
+from co2routes.sources.common import water_g_per_kg_co2
+from co2routes.sources.routes._options import NamedDefaultOption, settings
+from co2routes.thermo import cautions
+from co2routes.thermo.errors import InputError
 
 #: sugar key -> (label, species as bought, hydrolysis equation or None, price key, note)
 SUGARS = {
@@ -78,8 +78,8 @@ class Batch:
 
 def plan(request: RouteRequest) -> Batch:
     """Size a fermentation that delivers ``request.co2_kg`` of CO2 gas."""
-    from thermo import henry, species, water
-    from thermo.reaction import parse_reaction
+    from co2routes.thermo import henry, species, water
+    from co2routes.thermo.reaction import parse_reaction
 
     opt = settings(OPTIONS, request.options)
     label, sugar_sp, hydrolysis, _, _ = SUGARS[opt["sugar"]]
@@ -126,7 +126,7 @@ def plan(request: RouteRequest) -> Batch:
 
 def compute(request: RouteRequest) -> RouteResult:
     """Plan one fermentation batch for ``request`` (see the module notes)."""
-    from thermo import species
+    from co2routes.thermo import species
 
     opt = settings(OPTIONS, request.options)
     batch = plan(request)

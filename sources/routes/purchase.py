@@ -14,11 +14,11 @@ from __future__ import annotations
 
 from dataclasses import dataclass
 
-from sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult
-from sources.common import water_g_per_kg_co2
-from sources.routes._options import settings
-from thermo import cautions
-from thermo.errors import InputError
+from co2routes.sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult
+from co2routes.sources.common import water_g_per_kg_co2
+from co2routes.sources.routes._options import settings
+from co2routes.thermo import cautions
+from co2routes.thermo.errors import InputError
 
 #: form -> (what is bought, price key, what the route hands over)
 FORMS = {

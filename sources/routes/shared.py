@@ -4,7 +4,7 @@ from __future__ import annotations
 
 from typing import Mapping
 
-from sources.common import normalised
+from co2routes.sources.common import normalised
 
 #: Joules in a kilowatt-hour.
 J_PER_KWH = 3.6e6
@@ -18,14 +18,14 @@ YES_NO = ("yes", "no")
 def saturated(dry: Mapping[str, float], temperature_k: float, pressure_pa: float) -> dict[str, float]:
     """Mole fractions of a gas of dry composition ``dry`` once saturated with water at (T, P).
 
-    x_H2O = p_sat(T) / P (ideal mixing, :func:`thermo.water.vapor_pressure`); the dry gases share
+    x_H2O = p_sat(T) / P (ideal mixing, :func:`co2routes.thermo.water.vapor_pressure`); the dry gases share
     the rest in their own proportions. Species under 1e-9 mol/mol are dropped.
 
     >>> x = saturated({"CO2": 1.0}, 298.15, 101325.0)
     >>> round(x["H2O"], 5)
     0.03128
     """
-    from thermo.water import vapor_pressure
+    from co2routes.thermo.water import vapor_pressure
 
     x_w = vapor_pressure(temperature_k) / pressure_pa
     dry_n = normalised({k: v for k, v in dry.items() if k != "H2O"})

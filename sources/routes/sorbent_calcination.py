@@ -2,9 +2,9 @@
 
 Air is blown through a packed bed of hydrated lime (or quicklime); a share of the CO2 that passes
 is taken up as carbonate. The loaded bed is heated in an indirectly fired kiln to the temperature
-at which calcite gives off CO2 at the site pressure (:func:`thermo.calcination.calcination_temperature`);
+at which calcite gives off CO2 at the site pressure (:func:`co2routes.thermo.calcination.calcination_temperature`);
 the quicklime left is slaked back to hydroxide and reused. Each cycle sinters the lime, so the bed
-is sized for the capacity of its last cycle (:func:`thermo.lime.conversion_after_cycles`) and a
+is sized for the capacity of its last cycle (:func:`co2routes.thermo.lime.conversion_after_cycles`) and a
 share of it is bought new each batch. The release step (:func:`release`) and the bed loading
 (:func:`load_bed`) are shared with the breath route.
 """
@@ -13,11 +13,11 @@ from __future__ import annotations
 
 from dataclasses import dataclass
 
-from sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Site, Use
-from sources.common import water_g_per_kg_co2
-from sources.routes.shared import R, kwh, percent, saturated
-from thermo import cautions
-from thermo.co2 import MOLAR_MASS as M_CO2
+from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Site, Use
+from co2routes.sources.common import water_g_per_kg_co2
+from co2routes.sources.routes.shared import R, kwh, percent, saturated
+from co2routes.thermo import cautions
+from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
 
 #: Sorbent choice -> (species, name as bought, price key, bulk density [kg/m3]). Bulk densities of
 #: granular hydrated lime about 500 and of pebble quicklime about 900 kg/m3 (from memory).
@@ -77,13 +77,13 @@ def load_bed(co2_mol: float, co2_fraction: float, capture_fraction: float, bed_c
 
     n_gas = n_CO2 / (y c); V = n_gas R T / P; bed volume m / rho_bulk over depth L gives the face
     area A; dP = L (dP/L)_Ergun(d, e, v, rho_air, mu_air); W_fan = dP V / eta; time = V / (A v).
-    The gas is taken as air for density and viscosity (:mod:`thermo.air`).
+    The gas is taken as air for density and viscosity (:mod:`co2routes.thermo.air`).
     """
-    from thermo.air import air_density, air_viscosity
-    from thermo.packed_bed import ergun_gradient
+    from co2routes.thermo.air import air_density, air_viscosity
+    from co2routes.thermo.packed_bed import ergun_gradient
 
     species, _, _, bulk = SORBENTS[sorbent]
-    from thermo.species import molar_mass
+    from co2routes.thermo.species import molar_mass
 
     gas_mol = co2_mol / (co2_fraction * capture_fraction)
     gas_m3 = gas_mol * R * temperature_k / pressure_pa
@@ -127,14 +127,14 @@ class Release:
 def release(co2_mol: float, site: Site, opt) -> Release:
     """Size the bed for its last cycle, then calcine it and slake it back.
 
-    Bed calcium n_Ca = n_CO2 / X_N (X_N: :func:`thermo.lime.conversion_after_cycles`); make-up
-    bought per batch n_Ca / N; kiln heat n_CO2 q(X_N) (:func:`thermo.lime.kiln_heat`) supplied at
+    Bed calcium n_Ca = n_CO2 / X_N (X_N: :func:`co2routes.thermo.lime.conversion_after_cycles`); make-up
+    bought per batch n_Ca / N; kiln heat n_CO2 q(X_N) (:func:`co2routes.thermo.lime.kiln_heat`) supplied at
     ``kiln_efficiency`` by electricity or natural gas (higher heating value).
     """
-    from thermo.calcination import calcination_temperature
-    from thermo.flue import fuel_co2_kg_per_kwh
-    from thermo.lime import CARBONATION, SLAKING, conversion_after_cycles, kiln_heat, reaction_heat
-    from thermo.species import molar_mass
+    from co2routes.thermo.calcination import calcination_temperature
+    from co2routes.thermo.flue import fuel_co2_kg_per_kwh
+    from co2routes.thermo.lime import CARBONATION, SLAKING, conversion_after_cycles, kiln_heat, reaction_heat
+    from co2routes.thermo.species import molar_mass
 
     species, name, key, _ = SORBENTS[str(opt["sorbent"])]
     cycles = int(opt["cycles"])

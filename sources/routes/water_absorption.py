@@ -1,7 +1,7 @@
 """Dissolve CO2 from a gas into water, then pull it out again by vacuum or by warming.
 
 Water trickles down a column against the gas (air at the site's CO2, or natural-gas flue gas);
-each gas dissolves by Henry's law (:mod:`thermo.degassing`, :mod:`thermo.henry`). The loaded water
+each gas dissolves by Henry's law (:mod:`co2routes.thermo.degassing`, :mod:`co2routes.thermo.henry`). The loaded water
 is then flashed under a vacuum or warmed, and gives back a share of what it holds, together with
 the nitrogen, oxygen and argon it took up. Air holds so little CO2 that it takes over a thousand
 cubic metres of water per kilogram, and the gas that comes back is mostly air: the numbers here
@@ -10,12 +10,12 @@ show why this route ranks last for air, and where flue gas makes it merely poor.
 
 from __future__ import annotations
 
-from sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
-from sources.common import temperature_change, water_g_per_kg_co2
-from sources.routes.shared import YES_NO, R, kwh, percent, saturated
-from thermo import cautions
-from thermo.co2 import MOLAR_MASS as M_CO2
-from thermo.errors import InputError
+from co2routes.sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
+from co2routes.sources.common import temperature_change, water_g_per_kg_co2
+from co2routes.sources.routes.shared import YES_NO, R, kwh, percent, saturated
+from co2routes.thermo import cautions
+from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
+from co2routes.thermo.errors import InputError
 
 #: Density [kg/m3] and heat capacity [J/(kg K)] of liquid water at 20-25 degC (IAPWS-95: 998.2
 #: and 4181).
@@ -56,9 +56,9 @@ class WaterAbsorptionRoute:
 
     def compute(self, request: RouteRequest) -> RouteResult:
         """Plan one batch delivering ``request.co2_kg`` of CO2."""
-        from thermo.degassing import dissolution_enthalpy, flash, loaded
-        from thermo.flue import air_fractions, burn
-        from thermo.water import vapor_pressure
+        from co2routes.thermo.degassing import dissolution_enthalpy, flash, loaded
+        from co2routes.thermo.flue import air_fractions, burn
+        from co2routes.thermo.water import vapor_pressure
 
         opt, site = request.options, request.site
         t, p = site.temperature_k, site.pressure_pa

@@ -6,7 +6,7 @@ Sources named beside the asserts:
 * IAPWS-95 saturation pressure of water through the reference library `chemicals`
   (``chemicals.iapws.iapws95_Psat``), independent of the CoolProp path the project takes.
 * IUPAC molar masses through ``chemicals.elements.molecular_weight``; the water balance and the
-  cost shares are worked by hand from the module notes of ``sources.conditioning``.
+  cost shares are worked by hand from the module notes of ``co2routes.sources.conditioning``.
 * NIST Chemistry WebBook saturation pressure of CO2 at 0 degC: 3.4851 MPa (Span & Wagner 1996).
 * NIST/IIR saturated-liquid enthalpy of CO2 at 0 degC, 200.00 kJ/kg, and the enthalpy of
   sublimation 25.23 kJ/mol at 194.67 K (Giauque & Egan 1937), as in tests/thermo/test_dryice.py.
@@ -21,15 +21,15 @@ import pytest
 from chemicals.elements import molecular_weight
 from chemicals.iapws import iapws95_Psat
 
-from sources.base import RouteRequest, parse_options
-from sources.delivery import storage_loss_kg
-from sources.compare import compare, evaluate, row_record
-from sources.prices import cost_lines
-from sources.registry import catalogue
-from sources.scenario import demo, validate
-from thermo import cautions, flash
-from thermo.desiccants import get_desiccant
-from thermo.errors import InputError
+from co2routes.sources.base import RouteRequest, parse_options
+from co2routes.sources.delivery import storage_loss_kg
+from co2routes.sources.compare import compare, evaluate, row_record
+from co2routes.sources.prices import cost_lines
+from co2routes.sources.registry import catalogue
+from co2routes.sources.scenario import demo, validate
+from co2routes.thermo import cautions, flash
+from co2routes.thermo.desiccants import get_desiccant
+from co2routes.thermo.errors import InputError
 
 M_W = molecular_weight({"H": 2, "O": 1}) / 1000.0     # kg/mol, IUPAC via `chemicals`
 M_CO2 = molecular_weight({"C": 1, "O": 2}) / 1000.0   # kg/mol, IUPAC via `chemicals`
@@ -111,7 +111,7 @@ def test_each_route_cost_and_energy_include_its_dryer(gas_comparison):
         lines = {c.item: c for c in r.costs}
         charge = lines[f"desiccant {scenario.dryer.desiccant} (share of charge life)"]
         regen = lines["dryer regeneration (electric heater)"]
-        # shares worked by hand from the sources.conditioning notes, 1e-9
+        # shares worked by hand from the co2routes.sources.conditioning notes, 1e-9
         assert charge.amount == pytest.approx(bed.bed_mass_kg / life * share, rel=1e-9)
         assert regen.amount == pytest.approx(bed.regeneration_heat_j * share / 3.6e6, rel=1e-9)
         assert charge.cost > 0 and regen.cost > 0

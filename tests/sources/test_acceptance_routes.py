@@ -10,10 +10,10 @@ from importlib.metadata import EntryPoint
 
 import pytest
 
-from sources import registry
-from sources.compare import compare, evaluate
-from sources.registry import GROUP, catalogue
-from sources.scenario import demo
+from co2routes.sources import registry
+from co2routes.sources.compare import compare, evaluate
+from co2routes.sources.registry import GROUP, catalogue
+from co2routes.sources.scenario import demo
 
 ROUTE_IDS = ("acid-carbonate", "fermentation", "combustion", "sorbent-calcination", "breath",
              "water-absorption", "purchase")
@@ -23,7 +23,7 @@ ROUTE_IDS = ("acid-carbonate", "fermentation", "combustion", "sorbent-calcinatio
 def _no_user_price_book(monkeypatch, tmp_path_factory):
     """Use the shipped demo price book whatever the machine's config folder holds."""
     missing = tmp_path_factory.mktemp("config") / "prices.toml"
-    monkeypatch.setattr("sources.prices.user_book_path", lambda: missing)
+    monkeypatch.setattr("co2routes.sources.prices.user_book_path", lambda: missing)
 
 
 @pytest.fixture(scope="module")

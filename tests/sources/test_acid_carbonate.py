@@ -3,10 +3,10 @@
 import pytest
 from hypothesis import assume, given, strategies as st
 
-from sources.base import Route, RouteRequest, Site
-from sources.routes.acid_carbonate import EQUATIONS, ROUTE, plan
-from thermo import species
-from thermo.errors import InputError
+from co2routes.sources.base import Route, RouteRequest, Site
+from co2routes.sources.routes.acid_carbonate import EQUATIONS, ROUTE, plan
+from co2routes.thermo import species
+from co2routes.thermo.errors import InputError
 
 # IUPAC standard atomic weights (2021, abridged): H 1.008, C 12.011, O 15.999, Na 22.990,
 # Cl 35.45, S 32.06, K 39.098, Ca 40.078.
@@ -140,7 +140,7 @@ def test_dissolved_co2_matches_carroll_solubility():
     # 3-6 % below it at 10-40 degC: tolerance 8 %. Salting out by the acetate is not modelled.
     import math
 
-    from thermo.water import vapor_pressure
+    from co2routes.thermo.water import vapor_pressure
 
     req = _request(1.0, acid="acetic", strength="5 %")
     r, batch = ROUTE.compute(req), plan(req)
@@ -153,7 +153,7 @@ def test_dissolved_co2_matches_carroll_solubility():
 
 
 def test_warnings_cautions_and_refusals():
-    from thermo import cautions
+    from co2routes.thermo import cautions
 
     gyp = ROUTE.compute(_request(1.0, acid="sulfuric", carbonate="calcium-carbonate", added_water="3"))
     assert any("calcium sulfate" in w for w in gyp.warnings)
@@ -170,8 +170,8 @@ def test_warnings_cautions_and_refusals():
 
 
 def test_raw_gas_is_saturated_at_liquor_temperature():
-    # IAPWS-95 vapour pressure (thermo.water): water mole fraction = p_sat(T) / P.
-    from thermo.water import vapor_pressure
+    # IAPWS-95 vapour pressure (co2routes.thermo.water): water mole fraction = p_sat(T) / P.
+    from co2routes.thermo.water import vapor_pressure
 
     r = ROUTE.compute(_request(1.0, acid="acetic"))
     x = r.raw_gas.mole_fractions

@@ -3,11 +3,11 @@
 import pytest
 from hypothesis import given, strategies as st
 
-from sources.base import Route, RouteRequest, Site, parse_options
-from sources.routes.breath import ROUTE, co2_generation_rate, exhaled_air
-from thermo import cautions
-from thermo.co2 import MOLAR_MASS
-from thermo.flue import air_fractions
+from co2routes.sources.base import Route, RouteRequest, Site, parse_options
+from co2routes.sources.routes.breath import ROUTE, co2_generation_rate, exhaled_air
+from co2routes.thermo import cautions
+from co2routes.thermo.co2 import MOLAR_MASS
+from co2routes.thermo.flue import air_fractions
 
 
 def run(co2_kg=1.0, site=Site(), **opts):

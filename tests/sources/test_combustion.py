@@ -3,10 +3,10 @@
 import pytest
 from hypothesis import given, strategies as st
 
-from sources.base import Route, RouteRequest, Site, parse_options
-from sources.routes.combustion import ROUTE
-from thermo import cautions
-from thermo.co2 import MOLAR_MASS
+from co2routes.sources.base import Route, RouteRequest, Site, parse_options
+from co2routes.sources.routes.combustion import ROUTE
+from co2routes.thermo import cautions
+from co2routes.thermo.co2 import MOLAR_MASS
 
 # IUPAC standard atomic weights (2021) [g/mol]
 C, H = 12.011, 1.008

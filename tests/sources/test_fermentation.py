@@ -3,9 +3,9 @@
 import pytest
 from hypothesis import given, strategies as st
 
-from sources.base import Route, RouteRequest, Site
-from sources.routes.fermentation import ROUTE, plan
-from thermo import species
+from co2routes.sources.base import Route, RouteRequest, Site
+from co2routes.sources.routes.fermentation import ROUTE, plan
+from co2routes.thermo import species
 
 # IUPAC standard atomic weights: H 1.008, C 12.011, O 15.999.
 M_GLUCOSE = 6 * 12.011 + 12 * 1.008 + 6 * 15.999
@@ -91,11 +91,11 @@ def test_time_rule_q10():
 
 
 def test_raw_gas_and_cautions():
-    from thermo import cautions
-    from thermo.water import vapor_pressure
+    from co2routes.thermo import cautions
+    from co2routes.thermo.water import vapor_pressure
 
     r = ROUTE.compute(_request(temperature="25 degC"))
-    # IAPWS-95 saturation (thermo.water): y_H2O = p_sat(25 degC) / 1 atm = 3169.9 / 101325
+    # IAPWS-95 saturation (co2routes.thermo.water): y_H2O = p_sat(25 degC) / 1 atm = 3169.9 / 101325
     assert r.raw_gas.mole_fractions["H2O"] == pytest.approx(vapor_pressure(298.15) / 101325.0, rel=1e-9)
     assert cautions.FERMENTER in r.cautions and cautions.ASPHYXIATION in r.cautions
     assert r.byproducts[0].name == "ethanol" and r.byproducts[0].mass_kg > 0.9

@@ -2,15 +2,15 @@
 
 import pytest
 
-from sources.base import Reagent, Use
-from sources.prices import PriceBook, demo_book, load_book, parse_price, reagent_cost, use_cost
-from thermo.errors import InputError
+from co2routes.sources.base import Reagent, Use
+from co2routes.sources.prices import PriceBook, demo_book, load_book, parse_price, reagent_cost, use_cost
+from co2routes.thermo.errors import InputError
 
 
 def test_demo_book_says_it_is_invented():
     from importlib import resources
 
-    text = resources.files("sources").joinpath("data/prices.toml").read_text()
+    text = resources.files("co2routes.sources").joinpath("data/prices.toml").read_text()
     assert "INVENTED" in text
     assert demo_book().currency == "EUR"
 

@@ -3,9 +3,9 @@
 import pytest
 from hypothesis import given, strategies as st
 
-from sources.base import Route, RouteRequest, Site
-from sources.routes.purchase import ROUTE
-from thermo import cautions
+from co2routes.sources.base import Route, RouteRequest, Site
+from co2routes.sources.routes.purchase import ROUTE
+from co2routes.thermo import cautions
 
 
 def _request(kg=1.0, end="gas", **options):

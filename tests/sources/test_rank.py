@@ -1,7 +1,7 @@
 """Ranking: weights, unknown values count as worst, scores in [0, 1]."""
 
-from sources.base import Energy, RawGas, RouteResult, CostLine
-from sources.compare import rank
+from co2routes.sources.base import Energy, RawGas, RouteResult, CostLine
+from co2routes.sources.compare import rank
 
 
 def _result(rid, cost, hazard=1, purity=1.0):

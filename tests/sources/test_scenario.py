@@ -5,8 +5,8 @@ import tomllib
 
 import pytest
 
-from sources import scenario as sc
-from thermo.errors import InputError
+from co2routes.sources import scenario as sc
+from co2routes.thermo.errors import InputError
 
 
 def test_demos_are_labelled_invented_and_validate():
@@ -88,8 +88,8 @@ def test_read_only_folder_is_an_input_error(tmp_path):
 
 
 def test_dry_ice_hold_time_adds_the_box_loss_to_what_is_made():
-    from sources.compare import evaluate
-    from sources.registry import catalogue
+    from co2routes.sources.compare import evaluate
+    from co2routes.sources.registry import catalogue
 
     base = sc.validate({"demand": "3 kg", "end_product": "dry-ice", "site": {"temperature": "20 degC"}})
     held = sc.validate({"demand": "3 kg", "end_product": "dry-ice", "site": {"temperature": "20 degC"},

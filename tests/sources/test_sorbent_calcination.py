@@ -3,11 +3,11 @@
 import pytest
 from hypothesis import given, strategies as st
 
-from sources.base import Route, RouteRequest, Site, parse_options
-from sources.routes.sorbent_calcination import ROUTE, SORBENTS, load_bed, release
-from thermo import cautions, lime
-from thermo.co2 import MOLAR_MASS
-from thermo.species import molar_mass
+from co2routes.sources.base import Route, RouteRequest, Site, parse_options
+from co2routes.sources.routes.sorbent_calcination import ROUTE, SORBENTS, load_bed, release
+from co2routes.thermo import cautions, lime
+from co2routes.thermo.co2 import MOLAR_MASS
+from co2routes.thermo.species import molar_mass
 
 
 def run(co2_kg=1.0, site=Site(), **opts):
@@ -75,7 +75,7 @@ def test_more_cycles_more_dead_weight():
 def test_fan_pressure_drop_is_ergun():
     # fluids.packed_bed.Ergun (Bell, ChEDL) for the same bed and air: tol 1e-9
     from fluids.packed_bed import Ergun
-    from thermo.air import air_density, air_viscosity
+    from co2routes.thermo.air import air_density, air_viscosity
     site = Site()
     o = parse_options(ROUTE, {})
     rel = release(10.0, site, o)

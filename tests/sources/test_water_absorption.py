@@ -5,9 +5,9 @@ import math
 import pytest
 from hypothesis import assume, given, strategies as st
 
-from sources.base import Route, RouteRequest, Site, parse_options
-from sources.routes.water_absorption import ROUTE
-from thermo.co2 import MOLAR_MASS
+from co2routes.sources.base import Route, RouteRequest, Site, parse_options
+from co2routes.sources.routes.water_absorption import ROUTE
+from co2routes.thermo.co2 import MOLAR_MASS
 
 
 def run(co2_kg=1.0, site=Site(), **opts):
@@ -22,7 +22,7 @@ def test_loading_from_air_by_hand():
     # Sander (2015): Hcp = 3.3e-4 mol/(m3 Pa) at 298.15 K, 2400 K; air at 425 ppm over water at
     # 20 degC (p_sat 2339 Pa, IAPWS-95) at 80 % of saturation; tol 1e-3 relative
     h = 3.3e-4 * math.exp(2400 * (1 / 293.15 - 1 / 298.15))
-    from thermo.flue import air_fractions
+    from co2routes.thermo.flue import air_fractions
     p_co2 = air_fractions(425e-6)["CO2"] * (101325.0 - 2339.2)
     grams_per_m3 = 0.8 * h * p_co2 * 44.0095
     r = run(saturation="80 %", recirculate="no")
@@ -53,7 +53,7 @@ def test_heat_sign():
 
 
 def test_no_release_is_an_error():
-    from thermo.errors import InputError
+    from co2routes.thermo.errors import InputError
     with pytest.raises(InputError):
         run(vacuum_pressure="1 atm")
 
@@ -65,7 +65,7 @@ def test_balances_and_scaling(gas, release, saturation, absorbed, demand):
     # of the dissolved; doubling the demand doubles water and energy (tol 1e-9 relative)
     opts = dict(gas=gas, release=release, saturation=str(saturation), gas_absorbed=str(absorbed),
                 recirculate="no")
-    from thermo.errors import InputError
+    from co2routes.thermo.errors import InputError
     try:
         r1 = run(demand, **opts)
     except InputError:  # warming barely-loaded water at 1 atm frees no gas: refused, by design

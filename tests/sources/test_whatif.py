@@ -17,11 +17,11 @@ import math
 import numpy as np
 import pytest
 
-from sources.compare import compare, evaluate
-from sources.sensitivity import sensitivity, sensitivity_record
-from sources.uncertainty import uncertainty, uncertainty_record
-from sources.whatif import Distribution, cost_model, parse_uncertain
-from thermo.errors import InputError
+from co2routes.sources.compare import compare, evaluate
+from co2routes.sources.sensitivity import sensitivity, sensitivity_record
+from co2routes.sources.uncertainty import uncertainty, uncertainty_record
+from co2routes.sources.whatif import Distribution, cost_model, parse_uncertain
+from co2routes.thermo.errors import InputError
 from whatif_fakes import FakeRoute, scenario
 
 KWH = 3.6e6
@@ -200,7 +200,7 @@ def test_bad_names_and_units():
 
 def test_zero_width_equals_nominal_for_dry_ice():
     """Cost per kg of end product (dry ice): the Monte Carlo divides by the same basis as compare."""
-    from sources.scenario import validate
+    from co2routes.sources.scenario import validate
 
     route = FakeRoute()
     s = validate({"name": "dry ice", "demand": "3 kg", "end_product": "dry-ice", "uncertain": {

@@ -7,11 +7,11 @@ and a fixed 0.5 kg of disposal per batch (so cost per kg falls with demand).
 
 from __future__ import annotations
 
-from sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
+from co2routes.sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
 
 
 class FakeRoute:
-    """A route satisfying :class:`sources.base.Route`."""
+    """A route satisfying :class:`co2routes.sources.base.Route`."""
 
     def __init__(self, route_id: str = "fake", feed_key: str = "sucrose", feed_per_kg: float = 2.0) -> None:
         self.id = route_id
@@ -45,7 +45,7 @@ class FakeRoute:
 
 def scenario(uncertain: dict | None = None, **prices):
     """A validated scenario (3 kg batch) with the demo book and optional ``[uncertain]`` entries."""
-    from sources.scenario import validate
+    from co2routes.sources.scenario import validate
 
     document = {"name": "what-if test", "demand": "3 kg", "prices": dict(prices)}
     if uncertain is not None:

@@ -8,8 +8,8 @@ import pytest
 from hypothesis import given
 from hypothesis import strategies as st
 
-from thermo import calcination
-from thermo.errors import InputError
+from co2routes.thermo import calcination
+from co2routes.thermo.errors import InputError
 
 ATM = 101325.0
 

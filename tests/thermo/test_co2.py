@@ -7,8 +7,8 @@ import math
 import pytest
 from hypothesis import assume, given, strategies as st
 
-from thermo import co2
-from thermo.errors import InputError
+from co2routes.thermo import co2
+from co2routes.thermo.errors import InputError
 
 PSI = 6894.757293168361
 
@@ -18,7 +18,7 @@ PSI = 6894.757293168361
 def test_fixed_points_agree_with_the_equation_of_state():
     # Span & Wagner (1996) Sec. 3.1: T_t 216.592 K, p_t 0.51795 MPa, T_c 304.1282 K, p_c 7.3773 MPa.
     # CoolProp carries the same equation; its p_t comes out of the equation (14 Pa higher): 5e-5.
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     cp = coolprop()
     assert cp.PropsSI("Ttriple", "CO2") == pytest.approx(co2.TRIPLE_TEMPERATURE_K, abs=1e-6)

@@ -19,7 +19,7 @@ import math
 import pytest
 from scipy.optimize import brentq
 
-from thermo.compression import (
+from co2routes.thermo.compression import (
     MAX_DISCHARGE_K,
     compress_stage,
     cooling_tradeoff,
@@ -28,7 +28,7 @@ from thermo.compression import (
     minimum_stages,
     stage_pressures,
 )
-from thermo.errors import InputError
+from co2routes.thermo.errors import InputError
 
 R = 8.314462618  # J/(mol K), CODATA 2018
 M_CO2 = 0.0440095  # kg/mol, NIST WebBook

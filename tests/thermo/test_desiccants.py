@@ -8,10 +8,10 @@ import pytest
 from hypothesis import given
 from hypothesis import strategies as st
 
-from thermo.desiccants import (DESICCANT_IDS, R_WATER, equilibrium_loading, get_desiccant,
+from co2routes.thermo.desiccants import (DESICCANT_IDS, R_WATER, equilibrium_loading, get_desiccant,
                                load_desiccants, outlet_floor_pressure, outlet_limit,
                                suggest_desiccant, water_pressure_for_loading)
-from thermo.errors import InputError
+from co2routes.thermo.errors import InputError
 
 # Wang, Y.; LeVan, M. D. (2009) J. Chem. Eng. Data 54, 2839, tabulated water isotherms
 # (pressure Pa, temperature K, loading kg/kg), as transcribed in SorpPropLib's experimental data.
@@ -136,7 +136,7 @@ def test_unknown_desiccant_is_an_input_error():
 @given(st.sampled_from(["silica-gel", "molecular-sieve-3a", "molecular-sieve-13x", "activated-alumina"]),
        st.floats(min_value=1e-3, max_value=0.8), st.floats(min_value=273.15, max_value=343.15))
 def test_inverse_isotherm_round_trip(desiccant_id, rh, t):
-    from thermo.water import vapor_pressure
+    from co2routes.thermo.water import vapor_pressure
 
     d = get_desiccant(desiccant_id)
     p = rh * vapor_pressure(t)

@@ -9,8 +9,8 @@ from hypothesis import given
 from hypothesis import strategies as st
 
 from _refdata import crc_ion
-from thermo import dilution
-from thermo.errors import InputError
+from co2routes.thermo import dilution
+from co2routes.thermo.errors import InputError
 
 # Koretsky (2013), Engineering and Chemical Thermodynamics 2nd ed., Table 6.1: integral heat of
 # solution of HCl(g) in n H2O at 25 degC, kJ/mol (read, as transcribed in a public data file).

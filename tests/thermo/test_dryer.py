@@ -7,10 +7,10 @@ import math
 
 import pytest
 
-from thermo import water
-from thermo.dryer import ISBT_WATER_PPMV, DryerInput, breakthrough_curve, size_dryer
-from thermo.errors import InputError
-from thermo.gasmix import co2_flow_from_volume_flow, gas_state
+from co2routes.thermo import water
+from co2routes.thermo.dryer import ISBT_WATER_PPMV, DryerInput, breakthrough_curve, size_dryer
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.gasmix import co2_flow_from_volume_flow, gas_state
 
 DAY = 86400.0
 BASE = DryerInput(co2_flow_kg_s=2.0 / DAY, inlet_temperature_k=298.15,

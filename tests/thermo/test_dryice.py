@@ -13,9 +13,9 @@ from __future__ import annotations
 
 import pytest
 
-from thermo import flash
-from thermo.dryice import draw_yield, raw_per_dry_ice, storage_loss
-from thermo.errors import InputError
+from co2routes.thermo import flash
+from co2routes.thermo.dryice import draw_yield, raw_per_dry_ice, storage_loss
+from co2routes.thermo.errors import InputError
 
 DH_SUB = 25.23e3 / 0.0440095  # J/kg, Giauque & Egan 1937
 
@@ -41,7 +41,7 @@ def test_vapour_draw_makes_almost_no_snow_even_warm():
     for t in (293.15, 298.15):
         liq, vap = draw_yield(t, "liquid"), draw_yield(t, "vapor")
         assert vap.solid_fraction < 0.06 and liq.solid_fraction > 0.25
-        from thermo.co2 import saturation_at_temperature
+        from co2routes.thermo.co2 import saturation_at_temperature
 
         h_fg = saturation_at_temperature(t).enthalpy_of_vaporization_j_kg
         assert liq.solid_fraction - vap.solid_fraction == pytest.approx(

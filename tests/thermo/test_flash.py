@@ -4,9 +4,9 @@ from __future__ import annotations
 
 import pytest
 
-from thermo import flash
-from thermo.co2 import MOLAR_MASS, NORMAL_SUBLIMATION_K, TRIPLE_TEMPERATURE_K
-from thermo.errors import InputError
+from co2routes.thermo import flash
+from co2routes.thermo.co2 import MOLAR_MASS, NORMAL_SUBLIMATION_K, TRIPLE_TEMPERATURE_K
+from co2routes.thermo.errors import InputError
 
 
 def test_sublimation_enthalpy_per_kg():
@@ -40,7 +40,7 @@ def test_vapour_bridge_against_independent_heat_capacity():
     # bridge used here (Span & Wagner cp0) within 0.5 %.
     from chemicals.heat_capacity import TRC_gas_data, TRCCp_integral
 
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     row = TRC_gas_data.loc["124-38-9"]
     coeffs = [row[f"a{i}"] for i in range(8)]

@@ -5,8 +5,8 @@ import math
 import pytest
 from hypothesis import given, strategies as st
 
-from thermo import air, degassing, flue, lime, separation
-from thermo.errors import InputError
+from co2routes.thermo import air, degassing, flue, lime, separation
+from co2routes.thermo.errors import InputError
 
 # IUPAC standard atomic weights (abridged, 2021) [g/mol]
 C, H, O = 12.011, 1.008, 15.999
@@ -135,7 +135,7 @@ def test_lime_cycle_decay():
 
 def test_kiln_heat_is_reaction_plus_sensible():
     # Hess's law: CaCO3(Ta) -> CaO(Tc) + CO2(Tc) equals dH(298) plus the products' sensible heat
-    from thermo import species
+    from co2routes.thermo import species
     q = lime.kiln_heat("CaO(s)", 1.0, 298.15, 1150.0)
     direct = species.enthalpy("CaO(s)", 1150.0) + species.enthalpy("CO2(g)", 1150.0) - species.enthalpy("CaCO3(s)", 298.15)
     assert q.total_j == pytest.approx(direct, rel=1e-12)
@@ -145,7 +145,7 @@ def test_oxygen_in_air_saturated_water():
     # Benson & Krause (1984) / USGS dissolved-oxygen tables: 9.09 mg/L at 20 degC, 1 atm (from
     # memory); tol 5 %
     t, p = 293.15, 101325.0
-    from thermo.water import vapor_pressure
+    from co2routes.thermo.water import vapor_pressure
     pp = {"O2": flue.air_fractions(425e-6)["O2"] * (p - vapor_pressure(t))}
     c = degassing.loaded(pp, t)["O2"] * 31.998  # mg/L
     assert c == pytest.approx(9.09, rel=0.05)

@@ -4,15 +4,15 @@ import math
 
 import pytest
 
-from thermo.errors import InputError
-from thermo.henry import dissolved_co2_kg_m3, henry_constant
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.henry import dissolved_co2_kg_m3, henry_constant
 
 
 def _carroll_hcp(temperature_k: float) -> float:
     """Hcp [mol/(m3 Pa)] from the mole-fraction Henry constant of Carroll, Slupsky & Mather (1991),
     J. Phys. Chem. Ref. Data 20, 1201, abstract: ln(H21/MPa) = -6.8346 + 1.2817e4/T
     - 3.7668e6/T^2 + 2.997e8/T^3 (273-433 K); dilute: c = x rho_w / M_w with IAPWS-95 water."""
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     t = temperature_k
     h_pa = math.exp(-6.8346 + 1.2817e4 / t - 3.7668e6 / t**2 + 2.997e8 / t**3) * 1e6

@@ -8,8 +8,8 @@ import pytest
 from hypothesis import given
 from hypothesis import strategies as st
 
-from thermo.errors import InputError
-from thermo.packed_bed import (constant_pattern_shape, ergun_gradient, ergun_velocity, mtz_length,
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.packed_bed import (constant_pattern_shape, ergun_gradient, ergun_velocity, mtz_length,
                                wilke_viscosity)
 
 LB, FT, LBF, INCH = 0.45359237, 0.3048, 4.4482216152605, 0.0254

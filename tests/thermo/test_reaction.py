@@ -8,8 +8,8 @@ from hypothesis import given
 from hypothesis import strategies as st
 
 from _refdata import crc_ion
-from thermo.errors import InputError
-from thermo.reaction import imbalance, parse_reaction, reaction_enthalpy
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.reaction import imbalance, parse_reaction, reaction_enthalpy
 
 NAHCO3_HCL = "NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)"
 

@@ -5,8 +5,8 @@ from __future__ import annotations
 import pytest
 
 from _refdata import laliberte_density
-from thermo import solutions
-from thermo.errors import InputError
+from co2routes.thermo import solutions
+from co2routes.thermo.errors import InputError
 
 # (table key, Laliberte name, strongest w where the model applies, tolerance kg/m3)
 # Laliberte (2009) parameter ranges: HCl to w = 0.376, H2SO4 to 0.782, acetic acid to 1.
@@ -52,7 +52,7 @@ def test_citric_acid_rows():
 
 def test_water_row_against_iapws95():
     # IAPWS-95 through CoolProp: liquid water at 20 degC, 1 atm; 0.02 kg/m3.
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     rho = coolprop().PropsSI("D", "T", 293.15, "P", 101325, "Water")
     assert solutions.solution_density("HCl", 0.0) == pytest.approx(rho, abs=0.02)

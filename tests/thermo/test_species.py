@@ -7,8 +7,8 @@ from chemicals.elements import molecular_weight, nested_formula_parser
 from chemicals.reaction import Hfg, Hfl, Hfs
 
 from _refdata import crc_ion
-from thermo import species
-from thermo.errors import InputError
+from co2routes.thermo import species
+from co2routes.thermo.errors import InputError
 
 BRIEF_NAMES = ["NaHCO3(s)", "HCl(aq)", "CO2(g)", "H2O(l)", "CaCO3(s)", "C6H12O6(s)", "C2H5OH(l)",
                "CH4(g)", "C3H8(g)", "O2(g)", "N2(g)", "CaO(s)", "Ca(OH)2(s)"]
@@ -110,7 +110,7 @@ def test_sensible_enthalpy_against_janaf_and_iapws():
     dn2 = (species.enthalpy("N2(g)", 400) - species.enthalpy("N2(g)", 298.15)) / 1000
     assert dn2 == pytest.approx(2.971, abs=0.005)
     # IAPWS-95 through CoolProp: liquid water 25 -> 50 degC at 1 atm, within 0.3 %.
-    from thermo._lazy import coolprop
+    from co2routes.thermo._lazy import coolprop
 
     CP = coolprop()
     dh_kg = CP.PropsSI("H", "T", 323.15, "P", 101325, "Water") - CP.PropsSI(

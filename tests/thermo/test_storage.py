@@ -13,8 +13,8 @@ from __future__ import annotations
 
 import pytest
 
-from thermo.errors import InputError
-from thermo.storage import (
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.storage import (
     FILLING_RATIO_KG_PER_L,
     check_charge,
     hot_day_curve,
@@ -57,7 +57,7 @@ def test_hot_day_curve_follows_nist_saturation_while_two_phase():
 
 def test_hot_day_curve_marks_rated_and_relief():
     c = hot_day_curve(0.0134, 9.0, rated_pressure_pa=100e5, relief_pressure_pa=140e5)
-    from thermo.co2 import vessel_by_mass
+    from co2routes.thermo.co2 import vessel_by_mass
 
     assert c.rated_reached_k is not None and c.relief_reached_k is not None
     # The crossing temperatures give back the marked pressures (tolerance 0.1 bar).

@@ -3,8 +3,8 @@ Appendix B conversion factors), and the one-line errors naming the field."""
 
 import pytest
 
-from thermo.errors import InputError
-from thermo.units import parse, parse_positive
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.units import parse, parse_positive
 
 
 @pytest.mark.parametrize("text, dimension, si", [

@@ -7,8 +7,8 @@ import math
 import pytest
 from hypothesis import example, given, strategies as st
 
-from thermo import water
-from thermo.errors import InputError
+from co2routes.thermo import water
+from co2routes.thermo.errors import InputError
 
 
 # --- liquid water: IAPWS-95 -------------------------------------------------------------------

@@ -4,8 +4,8 @@ from __future__ import annotations
 
 from pathlib import Path
 
-from sources.compare import compare
-from sources.scenario import to_toml, validate
+from co2routes.sources.compare import compare
+from co2routes.sources.scenario import to_toml, validate
 
 
 async def settle(pilot) -> None:
@@ -17,7 +17,7 @@ async def settle(pilot) -> None:
 
 def table_ids(app) -> list[str]:
     """Route ids in the order the ranking table shows them."""
-    from tui.widgets.ranking import RankingTable
+    from co2routes.tui.widgets.ranking import RankingTable
 
     table = app.screen.query_one(RankingTable)
     return [str(key.value) for key in table.rows]
@@ -25,14 +25,14 @@ def table_ids(app) -> list[str]:
 
 def table_cells(app, route_id: str) -> list[str]:
     """The cell texts of one route's line in the ranking table."""
-    from tui.widgets.ranking import RankingTable
+    from co2routes.tui.widgets.ranking import RankingTable
 
     table = app.screen.query_one(RankingTable)
     return [str(c) for c in table.get_row(route_id)]
 
 
 def expected(document, routes):
-    """What sources.compare.compare says for ``document`` (the other face of the numbers)."""
+    """What co2routes.sources.compare.compare says for ``document`` (the other face of the numbers)."""
     return compare(validate(document, "test"), routes)
 
 

@@ -2,13 +2,13 @@
 
 They are NOT route models (the real ones live in sources/routes); they exist so the interface
 tests can run whatever routes happen to be registered, and so the numbers they produce can be
-checked against sources.compare.compare on the same objects. Their only "physics" is a fixed
+checked against co2routes.sources.compare.compare on the same objects. Their only "physics" is a fixed
 mass ratio, chosen so that the two routes trade places when demand or a price changes.
 """
 
 from __future__ import annotations
 
-from sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
+from co2routes.sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
 
 
 class LinearRoute:

@@ -1,4 +1,4 @@
-"""Editing: the ranking follows sources.compare.compare; a refused entry is marked and the last
+"""Editing: the ranking follows co2routes.sources.compare.compare; a refused entry is marked and the last
 good results stay."""
 
 from __future__ import annotations
@@ -9,9 +9,9 @@ from textual.widgets import Input
 
 from apphelp import COST_ONLY, expected, settle, table_cells, table_ids, write_scenario
 from doubles import routes as doubles
-from sources.scenario import demo_text
-from tui.app import Co2RoutesApp
-from tui.widgets.form import FieldRow
+from co2routes.sources.scenario import demo_text
+from co2routes.tui.app import Co2RoutesApp
+from co2routes.tui.widgets.form import FieldRow
 
 
 def _document():

@@ -11,10 +11,10 @@ from textual.widgets import Input
 
 from apphelp import settle, write_scenario
 from doubles import routes as doubles
-from sources.scenario import read_document
-from tui.app import Co2RoutesApp
-from tui.cli import main
-from tui.screens.dialogs import ConfirmDialog, PathDialog
+from co2routes.sources.scenario import read_document
+from co2routes.tui.app import Co2RoutesApp
+from co2routes.tui.cli import main
+from co2routes.tui.screens.dialogs import ConfirmDialog, PathDialog
 
 
 async def _answer_path(pilot, path) -> None:

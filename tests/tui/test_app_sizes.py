@@ -6,7 +6,7 @@ import pytest
 
 from apphelp import settle
 from doubles import routes as doubles
-from tui.app import Co2RoutesApp
+from co2routes.tui.app import Co2RoutesApp
 
 PANES = ("#title-line", "#form", "#ranking", "#weights-line", "#detail", "#cautions", "#status")
 

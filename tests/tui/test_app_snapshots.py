@@ -23,7 +23,7 @@ from textual.widgets import Input
 
 from apphelp import settle
 from doubles import routes as doubles
-from tui.app import Co2RoutesApp
+from co2routes.tui.app import Co2RoutesApp
 
 SNAPSHOTS = Path(__file__).parent / "snapshots"
 SIZES = ((80, 24), (120, 40))

@@ -5,8 +5,8 @@ from __future__ import annotations
 import subprocess
 import sys
 
-from sources.registry import catalogue
-from tui.app import Co2RoutesApp
+from co2routes.sources.registry import catalogue
+from co2routes.tui.app import Co2RoutesApp
 from apphelp import expected, settle, table_cells, table_ids
 from doubles import routes as doubles
 
@@ -18,7 +18,7 @@ async def test_start_up_shows_every_registered_route():
         await settle(pilot)
         planner = app.planner
         want = expected(planner.document, None)
-        # same routes, same order as sources.compare.compare (the command line's face)
+        # same routes, same order as co2routes.sources.compare.compare (the command line's face)
         assert table_ids(app) == [row.result.route_id for row in want.rows]
         assert {r.result.route_id for r in want.rows} == {r.id for r in catalogue().routes} - {
             f.split("'")[1] for f in want.failures if "'" in f}
@@ -42,7 +42,7 @@ async def test_start_up_with_doubles_shows_both_and_their_numbers():
 def test_first_frame_needs_no_heavy_library():
     """Importing the app and building its screens imports neither CoolProp, Cantera nor pint
     (they load in the first worker, after the first frame)."""
-    code = ("import sys; import tui.app, tui.screens.main, tui.widgets.detail; "
+    code = ("import sys; import co2routes.tui.app, co2routes.tui.screens.main, co2routes.tui.widgets.detail; "
             "bad = [m for m in ('CoolProp', 'cantera', 'pint') if m in sys.modules]; print(bad)")
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
     assert out.stdout.strip() == "[]"
@@ -58,9 +58,9 @@ async def test_the_first_compute_runs_in_a_worker():
 
 
 async def test_keys_screen_lists_every_binding():
-    from tui.screens.help import KeysScreen, key_name
-    from tui.screens.main import MainScreen
-    from tui.widgets.ranking import RankingTable
+    from co2routes.tui.screens.help import KeysScreen, key_name
+    from co2routes.tui.screens.main import MainScreen
+    from co2routes.tui.widgets.ranking import RankingTable
 
     app = Co2RoutesApp(None, routes=doubles())
     async with app.run_test(size=(120, 40)) as pilot:

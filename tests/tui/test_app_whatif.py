@@ -1,5 +1,5 @@
 """The what-if tabs: the chosen route's tornado (worked out only when its tab is open) and the Monte
-Carlo key's progress bar and spread, checked against sources.sensitivity and sources.uncertainty
+Carlo key's progress bar and spread, checked against co2routes.sources.sensitivity and co2routes.sources.uncertainty
 called directly (the numbers' other face)."""
 
 from __future__ import annotations
@@ -10,21 +10,21 @@ import tomllib
 from textual.widgets import Input, ProgressBar
 
 from apphelp import settle, write_scenario
-from sources.registry import catalogue
-from sources.scenario import demo_text
-from sources.sensitivity import route_sensitivity
-from sources.uncertainty import uncertainty
-from sources.whatif import parse_uncertain
-from tui.app import Co2RoutesApp
-from tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES
-from tui.widgets.spread import Spread
-from tui.widgets.tornado import Tornado
+from co2routes.sources.registry import catalogue
+from co2routes.sources.scenario import demo_text
+from co2routes.sources.sensitivity import route_sensitivity
+from co2routes.sources.uncertainty import uncertainty
+from co2routes.sources.whatif import parse_uncertain
+from co2routes.tui.app import Co2RoutesApp
+from co2routes.tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES
+from co2routes.tui.widgets.spread import Spread
+from co2routes.tui.widgets.tornado import Tornado
 
 TAB_WHATIF, TAB_SPREAD = "6", "7"
 
 
 def _want_tornado(app, route_id: str):
-    """What sources.sensitivity says for the route on the scenario the screen ranked."""
+    """What co2routes.sources.sensitivity says for the route on the scenario the screen ranked."""
     planner = app.planner
     scenario = planner.outcome.scenario
     routes = catalogue().routes
@@ -124,7 +124,7 @@ async def test_monte_carlo_key_shows_progress_then_the_spread_uncertainty_gives(
         assert result is not None and result.samples == SPREAD_SAMPLES
         # the bar was moved by the run's progress callback up to its end
         assert bar.total is not None and bar.total > 0 and bar.progress == bar.total
-        # the same as sources.uncertainty.uncertainty with the same seed
+        # the same as co2routes.sources.uncertainty.uncertainty with the same seed
         scenario = app.planner.outcome.scenario
         routes = catalogue().routes
         want = uncertainty(scenario, parse_uncertain(scenario, "test", None, routes), SPREAD_SAMPLES,

@@ -15,7 +15,7 @@ import math
 
 import pytest
 
-from tui.cli import main
+from co2routes.tui.cli import main
 
 NIST_P_SAT_0C = 3.4851e6  # Pa, NIST WebBook CO2 saturation at 273.15 K
 DRYER_KEYS = {"desiccant", "bed_mass_kg", "bed_volume_l", "bed_diameter_m", "bed_length_m",

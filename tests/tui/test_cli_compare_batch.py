@@ -11,7 +11,7 @@ import json
 
 import pytest
 
-from tui.cli import main
+from co2routes.tui.cli import main
 
 ROUTE_IDS = {"acid-carbonate", "fermentation", "combustion", "sorbent-calcination", "breath",
              "water-absorption", "purchase"}
@@ -34,7 +34,7 @@ M_ACETIC = 2 * C + 4 * H + 2 * O
 def _no_user_price_book(monkeypatch, tmp_path_factory):
     """Use the shipped demo price book whatever the machine's config folder holds."""
     missing = tmp_path_factory.mktemp("config") / "prices.toml"
-    monkeypatch.setattr("sources.prices.user_book_path", lambda: missing)
+    monkeypatch.setattr("co2routes.sources.prices.user_book_path", lambda: missing)
 
 
 def _json(capsys, argv):
@@ -88,7 +88,7 @@ def test_compare_markdown_is_a_table_of_every_route(capsys):
 
 
 def test_compare_table_names_every_route_and_the_local_codes(capsys):
-    from thermo.cautions import LOCAL_CODES
+    from co2routes.thermo.cautions import LOCAL_CODES
 
     assert main(["compare"]) == 0
     out = capsys.readouterr().out
@@ -152,7 +152,7 @@ def test_a_missing_price_is_null_never_zero(capsys, tmp_path, monkeypatch):
     book = tmp_path / "prices.toml"
     book.write_text('currency = "EUR"\n[prices]\nelectricity = "0.30 / kWh"\nwater = "3 / m**3"\n'
                     'co2-cylinder = "6.00 / kg"\n')
-    monkeypatch.setattr("sources.prices.user_book_path", lambda: book)
+    monkeypatch.setattr("co2routes.sources.prices.user_book_path", lambda: book)
     answer = _json(capsys, ["compare"])
     rows = {r["id"]: r for r in answer["routes"]}
     assert rows["combustion"]["cost_per_kg"] is None
@@ -218,7 +218,7 @@ def test_batch_markdown_and_table_read_as_a_recipe(capsys):
 # --- routes -----------------------------------------------------------------------------------------
 
 def test_routes_lists_every_route_with_options_units_and_defaults(capsys):
-    from sources.registry import catalogue
+    from co2routes.sources.registry import catalogue
 
     answer = _json(capsys, ["routes"])
     assert {r["id"] for r in answer["routes"]} == ROUTE_IDS and answer["failures"] == []

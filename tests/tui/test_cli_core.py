@@ -6,7 +6,7 @@ import sys
 
 import pytest
 
-from tui.cli import COMMANDS, main
+from co2routes.tui.cli import COMMANDS, main
 
 
 def test_every_verb_has_help_and_is_listed(capsys):
@@ -45,7 +45,7 @@ def test_unknown_option_is_one_line_and_status_2(capsys):
 
 
 def test_help_does_not_import_the_heavy_libraries():
-    code = ("import sys; from tui.cli import build_parser; build_parser(); "
+    code = ("import sys; from co2routes.tui.cli import build_parser; build_parser(); "
             "print(sorted(m for m in ('CoolProp', 'cantera', 'pint', 'textual') if m in sys.modules))")
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True).stdout
     assert out.strip() == "[]"

@@ -1,4 +1,4 @@
-"""``co2routes dryer`` through tui.cli.main: JSON answer and one-line errors with exit status 2."""
+"""``co2routes dryer`` through co2routes.tui.cli.main: JSON answer and one-line errors with exit status 2."""
 
 from __future__ import annotations
 
@@ -6,7 +6,7 @@ import json
 
 import pytest
 
-from tui.cli import main
+from co2routes.tui.cli import main
 
 BASE = ["dryer", "--flow", "2 kg/day", "--inlet-temperature", "25 degC",
         "--desiccant", "molecular-sieve-3a", "--cycle", "7 day"]

@@ -1,4 +1,4 @@
-"""``co2routes liquefy`` through ``tui.cli.main``.
+"""``co2routes liquefy`` through ``co2routes.tui.cli.main``.
 
 Sources: NIST Chemistry WebBook saturation pressures of CO2 (0 degC 3.4851 MPa, 25 degC 6.4342 MPa;
 Span & Wagner 1996); NIST WebBook density of CO2 gas at 1 atm, 25 degC, 1.808 kg/m3; common
@@ -11,8 +11,8 @@ import json
 
 import pytest
 
-from thermo import cautions
-from tui.cli import COMMANDS, main
+from co2routes.thermo import cautions
+from co2routes.tui.cli import COMMANDS, main
 
 BASE = ["liquefy", "--inlet-pressure", "1 atm", "--inlet-temperature", "25 degC"]
 

@@ -1,4 +1,4 @@
-"""The reaction and calcination verbs through tui.cli.main."""
+"""The reaction and calcination verbs through co2routes.tui.cli.main."""
 
 from __future__ import annotations
 
@@ -6,7 +6,7 @@ import json
 
 import pytest
 
-from tui.cli import main
+from co2routes.tui.cli import main
 
 NAHCO3_HCL = "NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)"
 
@@ -78,7 +78,7 @@ def test_calcination_by_pressure(capsys):
 
 
 def test_calcination_above_one_atmosphere_carries_the_pressure_caution(capsys):
-    from thermo import cautions
+    from co2routes.thermo import cautions
 
     assert cautions.PRESSURE not in run_json(capsys, "calcination", "--co2-pressure", "0.5 atm")["cautions"]
     assert cautions.PRESSURE in run_json(capsys, "calcination", "--co2-pressure", "1.5 atm")["cautions"]

@@ -1,4 +1,4 @@
-"""The CO2-state verbs through ``tui.cli.main``: saturation, store, snow, moisture."""
+"""The CO2-state verbs through ``co2routes.tui.cli.main``: saturation, store, snow, moisture."""
 
 from __future__ import annotations
 
@@ -6,8 +6,8 @@ import json
 
 import pytest
 
-from thermo import cautions
-from tui.cli import COMMANDS, main
+from co2routes.thermo import cautions
+from co2routes.tui.cli import COMMANDS, main
 
 
 def run_json(capsys, *argv):

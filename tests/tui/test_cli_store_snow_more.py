@@ -12,8 +12,8 @@ import json
 
 import pytest
 
-from thermo import cautions
-from tui.cli import main
+from co2routes.thermo import cautions
+from co2routes.tui.cli import main
 
 
 def run_json(capsys, *argv):

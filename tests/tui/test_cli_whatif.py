@@ -1,4 +1,4 @@
-"""``co2routes sensitivity`` and ``co2routes uncertainty`` through ``tui.cli.main``.
+"""``co2routes sensitivity`` and ``co2routes uncertainty`` through ``co2routes.tui.cli.main``.
 
 The routes are the small fakes of tests/sources/whatif_fakes.py (closed-form costs), so these
 tests do not depend on the real route models; the arithmetic they check is in
@@ -19,9 +19,9 @@ sys.path.insert(0, str(Path(__file__).resolve().parents[1] / "sources"))
 
 from whatif_fakes import FakeRoute  # noqa: E402
 
-from sources import registry, sensitivity, uncertainty  # noqa: E402
-from tui.cli import COMMANDS, main  # noqa: E402
-from tui.commands.uncertainty import ProgressBar  # noqa: E402
+from co2routes.sources import registry, sensitivity, uncertainty  # noqa: E402
+from co2routes.tui.cli import COMMANDS, main  # noqa: E402
+from co2routes.tui.commands.uncertainty import ProgressBar  # noqa: E402
 
 SCENARIO = """\
 name = "what-if cli test"

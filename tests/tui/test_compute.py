@@ -5,11 +5,11 @@ from __future__ import annotations
 import dataclasses
 
 from doubles import routes as doubles
-from sources.compare import compare
-from sources.scenario import demo
-from thermo import co2
-from tui.compute import breakthrough_points, demand_sweep, outcome, saturation_curve
-from tui.session import open_demo
+from co2routes.sources.compare import compare
+from co2routes.sources.scenario import demo
+from co2routes.thermo import co2
+from co2routes.tui.compute import breakthrough_points, demand_sweep, outcome, saturation_curve
+from co2routes.tui.session import open_demo
 
 
 def test_sweep_point_equals_compare_at_that_size():
@@ -49,7 +49,7 @@ def test_breakthrough_curve_rises_from_outlet_to_inlet_water():
     bed = rows[0].result.dryer
     assert hours[0] == 0.0 and list(hours) == sorted(hours)
     span = bed.inlet_water_ppmv - bed.outlet_ppmv
-    # the curve starts at the bed's outlet water and ends at the inlet's (thermo.dryer), 1 % of span
+    # the curve starts at the bed's outlet water and ends at the inlet's (co2routes.thermo.dryer), 1 % of span
     assert abs(ppmv[0] - bed.outlet_ppmv) < 0.01 * span
     assert abs(ppmv[-1] - bed.inlet_water_ppmv) / bed.inlet_water_ppmv < 0.01
     no_dryer = [r for r in result.comparison.rows if r.result.dryer is None]

@@ -7,10 +7,10 @@ import tomllib
 
 import pytest
 
-from sources.scenario import demo_text, read_document
-from thermo.errors import InputError
-from tui.fields import BASE_FIELDS, match_field, price_value
-from tui.session import ChangedOnDisk, edited, export, export_format, open_demo, open_file, save, stamp_of
+from co2routes.sources.scenario import demo_text, read_document
+from co2routes.thermo.errors import InputError
+from co2routes.tui.fields import BASE_FIELDS, match_field, price_value
+from co2routes.tui.session import ChangedOnDisk, edited, export, export_format, open_demo, open_file, save, stamp_of
 
 
 def test_save_open_round_trip_is_exact(tmp_path):
@@ -53,14 +53,14 @@ def test_edit_removes_emptied_tables_and_leaves_the_original():
 
 
 def test_error_field_names_find_their_form_field():
-    # field names as sources.scenario.validate writes them (file, line, dotted key)
+    # field names as co2routes.sources.scenario.validate writes them (file, line, dotted key)
     f = match_field(BASE_FIELDS, "fair.toml, line 9: dryer.target_ppmv")
     assert f is not None and f.keys == ("dryer", "target_ppmv")
     assert match_field(BASE_FIELDS, "option strength") is None
 
 
 def test_price_override_keeps_the_books_strength():
-    from sources.prices import demo_book
+    from co2routes.sources.prices import demo_book
 
     book = demo_book()
     assert price_value(book, "hydrochloric-acid", "0.50 / kg") == {"price": "0.50 / kg", "strength": "31 %"}

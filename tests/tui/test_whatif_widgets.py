@@ -11,10 +11,10 @@ sys.path.insert(0, str(Path(__file__).resolve().parents[1] / "sources"))
 
 from whatif_fakes import FakeRoute, scenario  # noqa: E402
 
-from sources.sensitivity import sensitivity  # noqa: E402
-from sources.uncertainty import uncertainty  # noqa: E402
-from tui.widgets.spread import Spread  # noqa: E402
-from tui.widgets.tornado import Tornado  # noqa: E402
+from co2routes.sources.sensitivity import sensitivity  # noqa: E402
+from co2routes.sources.uncertainty import uncertainty  # noqa: E402
+from co2routes.tui.widgets.spread import Spread  # noqa: E402
+from co2routes.tui.widgets.tornado import Tornado  # noqa: E402
 
 
 class Host(App):

@@ -1,6 +1,6 @@
 """Small helpers shared by the CO2-state verbs (``saturation``, ``store``, ``snow``, ``moisture``).
 
-Not a verb: it is not listed in ``tui.cli.COMMANDS``.
+Not a verb: it is not listed in ``co2routes.tui.cli.COMMANDS``.
 """
 
 from __future__ import annotations
@@ -8,7 +8,7 @@ from __future__ import annotations
 from contextlib import contextmanager
 from typing import Iterator
 
-from thermo.errors import InputError
+from co2routes.thermo.errors import InputError
 
 
 @contextmanager

@@ -22,11 +22,11 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The recipe's JSON record."""
-    from sources.compare import batch_record, check_option_tables, evaluate
-    from sources.registry import catalogue
-    from sources.scenario import demo, load
-    from thermo.errors import InputError
-    from thermo.units import parse_positive
+    from co2routes.sources.compare import batch_record, check_option_tables, evaluate
+    from co2routes.sources.registry import catalogue
+    from co2routes.sources.scenario import demo, load
+    from co2routes.thermo.errors import InputError
+    from co2routes.thermo.units import parse_positive
 
     scenario = demo() if args.scenario is None else load(args.scenario)
     route = catalogue().get(args.route)
@@ -45,8 +45,8 @@ def run(args: argparse.Namespace) -> dict:
 
 def render(answer: dict, args: argparse.Namespace) -> str:
     """The recipe as Markdown or the readable table."""
-    from tui.output import table_text
-    from tui.report import recipe_csv, recipe_markdown
+    from co2routes.tui.output import table_text
+    from co2routes.tui.report import recipe_csv, recipe_markdown
 
     if args.markdown:
         return recipe_markdown(args._result, args._currency).rstrip("\n")
@@ -73,7 +73,7 @@ def _readable(answer: dict) -> dict:
     >>> _readable({"cost_per_kg": None, "currency": "EUR", "temperature_change_k": -2.0})
     {'cost_per_kg': 'unknown: a price is missing from the price book'}
     """
-    from tui.output import format_value
+    from co2routes.tui.output import format_value
 
     out = {}
     cost = answer.get("cost_per_kg")
@@ -98,7 +98,7 @@ def _section(title: str, record: dict | None, empty: str) -> str:
       bed mass           0.5000 kg
       outlet dew point   -70.00 °C (203.15 K)
     """
-    from tui.output import format_value, label_of
+    from co2routes.tui.output import format_value, label_of
 
     if record is None:
         return f"\n\n{title}: {empty}"

@@ -19,11 +19,11 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The equilibrium point's JSON answer."""
-    from thermo import cautions
-    from thermo.calcination import calcination_temperature, co2_pressure_over_calcite
-    from thermo.units import parse, parse_positive
+    from co2routes.thermo import cautions
+    from co2routes.thermo.calcination import calcination_temperature, co2_pressure_over_calcite
+    from co2routes.thermo.units import parse, parse_positive
 
-    from tui.commands._options import for_option
+    from co2routes.tui.commands._options import for_option
 
     if args.temperature is not None:
         with for_option("--temperature"):

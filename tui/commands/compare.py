@@ -23,8 +23,8 @@ def load_scenario(args: argparse.Namespace):
     """The scenario named on the command line (or the demo), with ``--weight`` applied."""
     import dataclasses
 
-    from sources.scenario import CRITERIA, demo, load
-    from thermo.errors import InputError
+    from co2routes.sources.scenario import CRITERIA, demo, load
+    from co2routes.thermo.errors import InputError
 
     scenario = demo() if args.scenario is None else load(args.scenario)
     weights = dict(scenario.weights)
@@ -44,7 +44,7 @@ def load_scenario(args: argparse.Namespace):
 
 def run(args: argparse.Namespace) -> dict:
     """The comparison as its JSON record (the table and other formats come from ``render``)."""
-    from sources.compare import compare, comparison_record
+    from co2routes.sources.compare import compare, comparison_record
 
     comparison = compare(load_scenario(args))
     args._comparison = comparison
@@ -53,7 +53,7 @@ def run(args: argparse.Namespace) -> dict:
 
 def render(answer: dict, args: argparse.Namespace) -> str:
     """Table, CSV or Markdown of the comparison."""
-    from tui.report import comparison_csv, comparison_markdown, comparison_table
+    from co2routes.tui.report import comparison_csv, comparison_markdown, comparison_table
 
     if args.csv:
         return comparison_csv(args._comparison).rstrip("\n")

@@ -61,7 +61,7 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def _composition(text: str) -> dict[str, float]:
     """Parse ``CO2=0.12,N2=0.85`` into mole fractions."""
-    from thermo.errors import InputError
+    from co2routes.thermo.errors import InputError
 
     out: dict[str, float] = {}
     for part in text.split(","):
@@ -78,10 +78,10 @@ def _composition(text: str) -> dict[str, float]:
 
 def _flow(text: str, inp_kwargs: dict) -> float:
     """CO2 mass flow [kg/s] from a mass flow of dry gas or a volume flow of wet gas."""
-    from thermo.dryer import DryerInput, inlet_ppmv
-    from thermo.errors import InputError
-    from thermo.gasmix import SPECIES, co2_flow_from_volume_flow, molar_mass, normalise
-    from thermo.units import parse
+    from co2routes.thermo.dryer import DryerInput, inlet_ppmv
+    from co2routes.thermo.errors import InputError
+    from co2routes.thermo.gasmix import SPECIES, co2_flow_from_volume_flow, molar_mass, normalise
+    from co2routes.thermo.units import parse
 
     try:
         value, kind = parse(text, "--flow", "mass_flow"), "mass"
@@ -103,7 +103,7 @@ def _flow(text: str, inp_kwargs: dict) -> float:
 
 def _ppmv(text: str) -> float:
     """``--target-ppmv``: a bare number is ppmv ('20'); with a unit it is converted ('20 ppmv')."""
-    from thermo.units import parse_positive
+    from co2routes.thermo.units import parse_positive
 
     try:
         value = float(text)
@@ -114,9 +114,9 @@ def _ppmv(text: str) -> float:
 
 def run(args: argparse.Namespace) -> dict:
     """Size the bed and return the JSON answer."""
-    from thermo.dryer import DryerInput, breakthrough_curve, size_dryer
-    from thermo.errors import InputError
-    from thermo.units import parse, parse_positive
+    from co2routes.thermo.dryer import DryerInput, breakthrough_curve, size_dryer
+    from co2routes.thermo.errors import InputError
+    from co2routes.thermo.units import parse, parse_positive
 
     t = parse(args.inlet_temperature, "--inlet-temperature", "temperature")
     p = parse_positive(args.inlet_pressure, "--inlet-pressure", "pressure")

@@ -47,7 +47,7 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 
 def _stages(text: str | None) -> int | None:
-    from thermo.errors import InputError
+    from co2routes.thermo.errors import InputError
 
     if text is None:
         return None
@@ -66,9 +66,9 @@ def _kj(value: float) -> float:
 
 def run(args: argparse.Namespace) -> dict:
     """The liquefaction plan as the JSON answer."""
-    from thermo import cautions, compression
-    from thermo.errors import InputError
-    from thermo.units import parse, parse_positive
+    from co2routes.thermo import cautions, compression
+    from co2routes.thermo.errors import InputError
+    from co2routes.thermo.units import parse, parse_positive
 
     p_in = parse_positive(args.inlet_pressure, "--inlet-pressure", "pressure")
     t_in = parse_positive(args.inlet_temperature, "--inlet-temperature", "temperature")

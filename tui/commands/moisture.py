@@ -21,9 +21,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The gas's water content as the JSON answer."""
-    from thermo import cautions, water
-    from thermo.units import parse, parse_positive
-    from tui.commands._options import for_option
+    from co2routes.thermo import cautions, water
+    from co2routes.thermo.units import parse, parse_positive
+    from co2routes.tui.commands._options import for_option
 
     p = parse_positive(args.pressure, "--pressure", "pressure")
     option, text = (("--temperature", args.temperature) if args.temperature is not None

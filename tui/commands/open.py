@@ -20,8 +20,8 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """Check the file can be read, then run the interface on it until the user quits."""
-    from tui.cli import _open_interface
-    from tui.session import open_file
+    from co2routes.tui.cli import _open_interface
+    from co2routes.tui.session import open_file
 
     opened = open_file(args.file)
     status = _open_interface(str(opened.path))

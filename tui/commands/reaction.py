@@ -21,10 +21,10 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The reaction's JSON answer."""
-    from sources.compare import heat_words
-    from thermo import cautions
-    from thermo.reaction import parse_reaction, reaction_enthalpy
-    from thermo.units import parse
+    from co2routes.sources.compare import heat_words
+    from co2routes.thermo import cautions
+    from co2routes.thermo.reaction import parse_reaction, reaction_enthalpy
+    from co2routes.thermo.units import parse
 
     temperature = parse(args.temperature, "--temperature", "temperature")
     result = reaction_enthalpy(args.equation, temperature)
@@ -33,7 +33,7 @@ def run(args: argparse.Namespace) -> dict:
     if any(n.endswith("(aq)") for n in names):
         warnings.append(
             "Dissolved species are taken at infinite dilution; diluting a strong acid from its "
-            "bought strength adds its heat of dilution (see thermo.dilution)."
+            "bought strength adds its heat of dilution (see co2routes.thermo.dilution)."
         )
     return {
         "equation": result.equation,

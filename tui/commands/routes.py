@@ -14,7 +14,7 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """Every route and option, plus any route that failed to load."""
-    from sources.registry import catalogue
+    from co2routes.sources.registry import catalogue
 
     cat = catalogue()
     return {

@@ -19,9 +19,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The saturation point as the JSON answer."""
-    from thermo import cautions, co2
-    from thermo.units import parse
-    from tui.commands._options import for_option
+    from co2routes.thermo import cautions, co2
+    from co2routes.thermo.units import parse
+    from co2routes.tui.commands._options import for_option
 
     if args.temperature is not None:
         t = parse(args.temperature, "--temperature", "temperature")

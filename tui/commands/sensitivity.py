@@ -23,9 +23,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def whatif_inputs(args: argparse.Namespace):
     """The scenario, its ``[uncertain]`` spreads and the chosen routes (shared with ``uncertainty``)."""
-    from sources.registry import catalogue
-    from sources.scenario import demo, demo_text, read_document, validate
-    from sources.whatif import parse_uncertain
+    from co2routes.sources.registry import catalogue
+    from co2routes.sources.scenario import demo, demo_text, read_document, validate
+    from co2routes.sources.whatif import parse_uncertain
 
     if args.scenario is None:
         text, source = demo_text(), "demo polytunnel"
@@ -41,8 +41,8 @@ def whatif_inputs(args: argparse.Namespace):
 
 def run(args: argparse.Namespace) -> dict:
     """The sensitivity as its JSON record."""
-    from sources.sensitivity import sensitivity, sensitivity_record
-    from thermo.errors import InputError
+    from co2routes.sources.sensitivity import sensitivity, sensitivity_record
+    from co2routes.thermo.errors import InputError
 
     try:
         top = int(args.top)
@@ -66,7 +66,7 @@ def per_kg_words(answer: dict) -> str:
 
 def render(answer: dict, args: argparse.Namespace) -> str:
     """A text tornado per route: bars from the low-end to the high-end cost around the nominal."""
-    from thermo.cautions import LOCAL_CODES
+    from co2routes.thermo.cautions import LOCAL_CODES
 
     top = int(args.top)
     cur = answer["currency"]
@@ -114,7 +114,7 @@ def _shown(x: float, unit: str) -> str:
     >>> _shown(0.05, "1"), _shown(8.333e-08, "per J"), _shown(293.15, "K")
     ('5 %', '0.3 per kWh', '20 degC')
     """
-    from tui.output import _num
+    from co2routes.tui.output import _num
 
     if unit == "1":
         return f"{x * 100:.3g} %"

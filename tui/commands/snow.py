@@ -47,9 +47,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The flash result as the JSON answer."""
-    from thermo import cautions, flash
-    from thermo.units import parse, parse_positive
-    from tui.commands._options import for_option
+    from co2routes.thermo import cautions, flash
+    from co2routes.thermo.units import parse, parse_positive
+    from co2routes.tui.commands._options import for_option
 
     mass = None if args.liquid_mass is None else parse_positive(args.liquid_mass, "--liquid-mass", "mass")
     if args.liquid_temperature is not None:
@@ -64,7 +64,7 @@ def run(args: argparse.Namespace) -> dict:
         "The fraction is the adiabatic ideal: snow horns and bags collect less, since some snow is "
         "carried off with the gas and warm surfaces sublime it."
     ]
-    from thermo import dryice
+    from co2routes.thermo import dryice
 
     liquid = dryice.draw_yield(result.liquid_temperature_k, "liquid")
     vapor = dryice.draw_yield(result.liquid_temperature_k, "vapor")
@@ -101,9 +101,9 @@ def run(args: argparse.Namespace) -> dict:
 
 def _storage(args: argparse.Namespace, snow_kg: float | None, warnings: list[str]) -> dict:
     """Keys of the insulated-box storage loss (empty without --box-area and --box-u)."""
-    from thermo import dryice
-    from thermo.errors import InputError
-    from thermo.units import parse, parse_positive
+    from co2routes.thermo import dryice
+    from co2routes.thermo.errors import InputError
+    from co2routes.thermo.units import parse, parse_positive
 
     if args.box_area is None and args.box_u is None:
         if args.hold_time is not None or args.stored_mass is not None:

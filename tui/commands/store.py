@@ -43,10 +43,10 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 
 def vessel_state(args: argparse.Namespace):
-    """The :class:`thermo.co2.VesselState` the options describe (parsed, options named in errors)."""
-    from thermo import co2
-    from thermo.units import parse, parse_positive
-    from tui.commands._options import for_option
+    """The :class:`co2routes.thermo.co2.VesselState` the options describe (parsed, options named in errors)."""
+    from co2routes.thermo import co2
+    from co2routes.thermo.units import parse, parse_positive
+    from co2routes.tui.commands._options import for_option
 
     volume = parse_positive(args.volume, "--volume", "volume")
     t = _temperature(parse(args.temperature, "--temperature", "temperature"))
@@ -61,8 +61,8 @@ def vessel_state(args: argparse.Namespace):
 
 def _temperature(t: float) -> float:
     """``t`` [K] if a vessel of fluid CO2 can be at it, else an error naming ``--temperature``."""
-    from thermo import co2
-    from thermo.errors import InputError
+    from co2routes.thermo import co2
+    from co2routes.thermo.errors import InputError
 
     if not co2.TRIPLE_TEMPERATURE_K <= t <= co2.MAX_TEMPERATURE_K:
         raise InputError("--temperature", "a vessel of fluid CO2 must be at -56.56 degC (the triple "
@@ -72,8 +72,8 @@ def _temperature(t: float) -> float:
 
 def run(args: argparse.Namespace) -> dict:
     """The vessel state as the JSON answer."""
-    from thermo import cautions
-    from thermo.units import parse_positive
+    from co2routes.thermo import cautions
+    from co2routes.thermo.units import parse_positive
 
     rated = None if args.rated_pressure is None else parse_positive(
         args.rated_pressure, "--rated-pressure", "pressure")
@@ -121,9 +121,9 @@ def run(args: argparse.Namespace) -> dict:
 
 
 def _charge_check(state, force: bool) -> list[str]:
-    """Refuse a charge over the filling ratio unless ``--force`` (thermo.storage.check_charge)."""
-    from thermo import storage
-    from thermo.errors import InputError
+    """Refuse a charge over the filling ratio unless ``--force`` (co2routes.thermo.storage.check_charge)."""
+    from co2routes.thermo import storage
+    from co2routes.thermo.errors import InputError
 
     try:
         return list(storage.check_charge(state.volume_m3, state.co2_mass_kg, force=force,
@@ -135,9 +135,9 @@ def _charge_check(state, force: bool) -> list[str]:
 
 def _hot_day(args: argparse.Namespace, state, rated: float | None, warnings: list[str]) -> dict:
     """Keys of the hot-day pressure curve for the vessel's charge."""
-    from thermo import storage
-    from thermo.units import parse, parse_positive
-    from tui.commands._options import for_option
+    from co2routes.thermo import storage
+    from co2routes.thermo.units import parse, parse_positive
+    from co2routes.tui.commands._options import for_option
 
     hot = parse(args.hot_day_temperature, "--hot-day-temperature", "temperature")
     relief = (storage.DEFAULT_RELIEF_PRESSURE_PA if args.relief_pressure is None else
@@ -173,9 +173,9 @@ def _hot_day(args: argparse.Namespace, state, rated: float | None, warnings: lis
 
 def _transfer(args: argparse.Namespace, state, warnings: list[str]) -> dict:
     """Keys of a fill of this vessel from a gas buffer until the pressures are equal."""
-    from thermo import storage
-    from thermo.errors import InputError
-    from thermo.units import parse, parse_positive
+    from co2routes.thermo import storage
+    from co2routes.thermo.errors import InputError
+    from co2routes.thermo.units import parse, parse_positive
 
     if args.buffer_volume is None or args.buffer_pressure is None:
         missing = "--buffer-volume" if args.buffer_volume is None else "--buffer-pressure"

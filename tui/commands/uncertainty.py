@@ -28,7 +28,7 @@ def whole(text: str, option: str, least: int) -> int:
     >>> whole("10000", "--samples", 1)
     10000
     """
-    from thermo.errors import InputError
+    from co2routes.thermo.errors import InputError
 
     try:
         value = int(str(text).strip())
@@ -67,8 +67,8 @@ class ProgressBar:
 
 def run(args: argparse.Namespace) -> dict:
     """The Monte Carlo result as its JSON record."""
-    from sources.uncertainty import uncertainty, uncertainty_record
-    from tui.commands.sensitivity import whatif_inputs
+    from co2routes.sources.uncertainty import uncertainty, uncertainty_record
+    from co2routes.tui.commands.sensitivity import whatif_inputs
 
     samples = whole(args.samples, "--samples", 1)
     seed = None if args.seed is None else whole(args.seed, "--seed", 0)
@@ -84,8 +84,8 @@ def run(args: argparse.Namespace) -> dict:
 
 def render(answer: dict, args: argparse.Namespace) -> str:
     """A table of the percentiles with a text box chart (P10 .. P90 box, P50 mark) per route."""
-    from thermo.cautions import LOCAL_CODES
-    from tui.commands.sensitivity import per_kg_words
+    from co2routes.thermo.cautions import LOCAL_CODES
+    from co2routes.tui.commands.sensitivity import per_kg_words
 
     cur = answer["currency"]
     rows = [r for r in answer["routes"] if r["cost_per_kg_p50"] is not None]

@@ -14,14 +14,14 @@ from typing import Any
 
 from textual import work
 
-from thermo.errors import InputError
-from tui.screens.dialogs import ConfirmDialog, PathDialog
-from tui.session import ChangedOnDisk, Opened, export, export_format, open_file, save
+from co2routes.thermo.errors import InputError
+from co2routes.tui.screens.dialogs import ConfirmDialog, PathDialog
+from co2routes.tui.session import ChangedOnDisk, Opened, export, export_format, open_file, save
 
 
 def json_text(record: dict[str, Any]) -> str:
     """The JSON text the command line prints for ``record`` (``--json``), byte for byte."""
-    from tui.output import emit
+    from co2routes.tui.output import emit
 
     out = io.StringIO()
     emit(record, SimpleNamespace(json=True), out)
@@ -61,7 +61,7 @@ class Filing:
 
     def replace_opened(self, opened: Opened) -> None:
         """Show ``opened`` instead of the current scenario (edits are dropped)."""
-        from tui.widgets.form import ScenarioForm
+        from co2routes.tui.widgets.form import ScenarioForm
 
         self.opened = opened
         self.document = dict(opened.document)
@@ -74,7 +74,7 @@ class Filing:
     # -- save -----------------------------------------------------------------------------
 
     def _refuse_if_marked(self) -> bool:
-        from tui.widgets.form import ScenarioForm
+        from co2routes.tui.widgets.form import ScenarioForm
 
         marked = self.query_one(ScenarioForm).marked()
         if marked:
@@ -124,7 +124,7 @@ class Filing:
                 self._say("not saved")
                 return
             replace = True
-        from sources.scenario import to_toml
+        from co2routes.sources.scenario import to_toml
 
         self.opened = Opened(dict(self.document), to_toml(self.document), path, stamp, str(path))
         self.dirty = False
@@ -135,8 +135,8 @@ class Filing:
 
     def ranking_text(self, fmt: str) -> str:
         """The ranking as the command line's ``compare --markdown/--csv/--json`` prints it."""
-        from sources.compare import comparison_record
-        from tui.report import comparison_csv, comparison_markdown
+        from co2routes.sources.compare import comparison_record
+        from co2routes.tui.report import comparison_csv, comparison_markdown
 
         comparison = self.outcome.comparison
         if fmt == "markdown":
@@ -147,8 +147,8 @@ class Filing:
 
     def recipe_text(self, fmt: str) -> str:
         """The chosen route's batch as ``batch --markdown/--csv/--json`` prints it."""
-        from sources.compare import batch_record
-        from tui.report import recipe_csv, recipe_markdown
+        from co2routes.sources.compare import batch_record
+        from co2routes.tui.report import recipe_csv, recipe_markdown
 
         row = self.selected_row()
         currency = self.outcome.comparison.currency

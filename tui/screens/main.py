@@ -2,7 +2,7 @@
 detail, and its cautions, all at once.
 
 Every edit changes a copy of the scenario document and starts an exclusive thread worker that
-validates it and ranks the routes (:func:`tui.compute.outcome`); a refused value is marked under
+validates it and ranks the routes (:func:`co2routes.tui.compute.outcome`); a refused value is marked under
 its field and the last good results stay on screen. Charts are worked out by a second worker
 after the ranking is shown. The first computation also runs in a worker, so the first frame is
 drawn before pint, the route models, CoolProp or Cantera are imported.
@@ -20,14 +20,14 @@ from textual.containers import Horizontal, Vertical
 from textual.screen import Screen
 from textual.widgets import Input, ProgressBar, Static, TabbedContent
 
-from tui.fields import BASE_FIELDS, Field, match_field, price_value
-from tui.screens.filing import Filing
-from tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES, WhatIf
-from tui.screens.working import Working
-from tui.session import Opened, edited, value_at
-from tui.widgets.detail import TABS, CautionPanel, RouteDetail
-from tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
-from tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
+from co2routes.tui.fields import BASE_FIELDS, Field, match_field, price_value
+from co2routes.tui.screens.filing import Filing
+from co2routes.tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES, WhatIf
+from co2routes.tui.screens.working import Working
+from co2routes.tui.session import Opened, edited, value_at
+from co2routes.tui.widgets.detail import TABS, CautionPanel, RouteDetail
+from co2routes.tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
+from co2routes.tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
 
 
 class MainScreen(Filing, Working, WhatIf, Screen):
@@ -57,7 +57,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self.opened = opened
         #: the document as edited now (it may hold a refused value)
         self.document: dict[str, Any] = dict(opened.document)
-        #: the last good :class:`tui.compute.Outcome`, ``None`` until one is worked out
+        #: the last good :class:`co2routes.tui.compute.Outcome`, ``None`` until one is worked out
         self.outcome: Any = None
         self.sweep: Any = None
         self.curve: Any = None
@@ -249,7 +249,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
 
     @on(WeightNudged)
     def _nudged(self, event: WeightNudged) -> None:
-        from sources.scenario import DEFAULT_WEIGHTS
+        from co2routes.sources.scenario import DEFAULT_WEIGHTS
 
         keys = ("weights", event.criterion)
         now = value_at(self.document, keys)

@@ -1,14 +1,14 @@
-"""The planning screen's what-if workers (a mixin of :class:`tui.screens.main.MainScreen`).
+"""The planning screen's what-if workers (a mixin of :class:`co2routes.tui.screens.main.MainScreen`).
 
 - **Sensitivity** (the "What if" tab): the chosen route's inputs swung one at a time
-  (:func:`sources.sensitivity.route_sensitivity`). Worked out lazily, in an exclusive thread
+  (:func:`co2routes.sources.sensitivity.route_sensitivity`). Worked out lazily, in an exclusive thread
   worker: when the tab is opened, and again after an edit or a new route choice only while the tab
   is open. An answer is kept per (ranking generation, route), so going back to the tab costs nothing.
 - **Uncertainty** (the "Spread" tab, key :data:`SPREAD_KEY`): a Monte Carlo run of every route
-  (:func:`sources.uncertainty.uncertainty`) with a fresh seed, in an exclusive thread worker that
+  (:func:`co2routes.sources.uncertainty.uncertainty`) with a fresh seed, in an exclusive thread worker that
   moves the tab's progress bar; a newer run or leaving the screen stops it at its next step.
 
-Both take their ranges from the scenario's ``[uncertain]`` table (:func:`sources.whatif.parse_uncertain`);
+Both take their ranges from the scenario's ``[uncertain]`` table (:func:`co2routes.sources.whatif.parse_uncertain`);
 with none, the sensitivity uses its default swings and the Monte Carlo draws every price +/-25 %.
 """
 
@@ -21,8 +21,8 @@ from typing import Any
 from textual import work
 from textual.worker import get_current_worker
 
-from tui.widgets.detail import TABS, RouteDetail
-from tui.widgets.whatif import SpreadPanel, TornadoPanel
+from co2routes.tui.widgets.detail import TABS, RouteDetail
+from co2routes.tui.widgets.whatif import SpreadPanel, TornadoPanel
 
 #: The key that draws the Monte Carlo samples (not used by any other binding).
 SPREAD_KEY = "u"
@@ -37,9 +37,9 @@ class _Stopped(Exception):
 class WhatIf:
     """State and workers of the two what-if tabs; the screen calls :meth:`whatif_update`."""
 
-    #: (generation, route id) -> the :class:`sources.sensitivity.RouteSensitivity` worked out
+    #: (generation, route id) -> the :class:`co2routes.sources.sensitivity.RouteSensitivity` worked out
     tornadoes: dict[tuple[int, str], Any]
-    #: the last Monte Carlo result (:class:`sources.uncertainty.Uncertainty`) and its generation
+    #: the last Monte Carlo result (:class:`co2routes.sources.uncertainty.Uncertainty`) and its generation
     spread: Any = None
     spread_generation = -1
     #: seconds the last sensitivity took (for the tab's note and the benchmarks)
@@ -48,13 +48,13 @@ class WhatIf:
     # -- shared ---------------------------------------------------------------------------
 
     def _whatif_routes(self) -> tuple[Any, ...]:
-        from sources.registry import catalogue
+        from co2routes.sources.registry import catalogue
 
         return tuple(self.routes) if self.routes is not None else catalogue().routes
 
     def whatif_distributions(self, outcome: Any) -> dict[str, Any]:
         """The ``[uncertain]`` entries of the ranked scenario, checked (raises ``InputError``)."""
-        from sources.whatif import parse_uncertain
+        from co2routes.sources.whatif import parse_uncertain
 
         text = self.opened.text if self.document == self.opened.document else None
         return parse_uncertain(outcome.scenario, self.opened.source, text, self._whatif_routes())
@@ -92,7 +92,7 @@ class WhatIf:
     @work(exclusive=True, thread=True, group="tornado")
     def swing_inputs(self, outcome: Any, generation: int, route_id: str) -> None:
         """Work out the tornado of ``route_id`` for ``outcome`` (thread worker)."""
-        from sources.sensitivity import route_sensitivity
+        from co2routes.sources.sensitivity import route_sensitivity
 
         worker = get_current_worker()
         start = time.perf_counter()
@@ -118,7 +118,7 @@ class WhatIf:
             self._say(f"{len(result.inputs)} inputs of {route_id} swung in {seconds:.2f} s")
 
     def _show_tornado(self, key: tuple[int, str]) -> None:
-        from sources.whatif import SWINGS
+        from co2routes.sources.whatif import SWINGS
 
         named = len(self.outcome.scenario.document.get("uncertain", {}) or {})
         p_lo, p_hi = SWINGS["relative"]
@@ -145,7 +145,7 @@ class WhatIf:
     @work(exclusive=True, thread=True, group="spread")
     def draw_samples(self, outcome: Any, generation: int, samples: int, seed: int) -> None:
         """Monte Carlo of every route for ``outcome`` (thread worker) moving the progress bar."""
-        from sources.uncertainty import uncertainty
+        from co2routes.sources.uncertainty import uncertainty
 
         worker = get_current_worker()
         bar = self.query_one("#spread-bar")

@@ -1,4 +1,4 @@
-"""The planning screen's workers (a mixin of :class:`tui.screens.main.MainScreen`).
+"""The planning screen's workers (a mixin of :class:`co2routes.tui.screens.main.MainScreen`).
 
 Ranking runs in an exclusive thread worker: a newer edit cancels the older run, which drops its
 answer; after validation (quick) the worker waits :data:`SETTLE_S` for the next key before the
@@ -15,8 +15,8 @@ from typing import Any
 from textual import work
 from textual.worker import get_current_worker
 
-from tui.fields import Field, option_fields, price_fields
-from tui.widgets.form import ScenarioForm
+from co2routes.tui.fields import Field, option_fields, price_fields
+from co2routes.tui.widgets.form import ScenarioForm
 
 #: A computation slower than this [s] shows the progress bar.
 BUSY_AFTER_S = 0.2
@@ -30,8 +30,8 @@ class Working:
     @work(exclusive=True, thread=True, group="compute")
     def recompute(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
         """Validate and rank (thread worker); hands the answer to the UI thread."""
-        from thermo.errors import InputError
-        from tui.compute import outcome
+        from co2routes.thermo.errors import InputError
+        from co2routes.tui.compute import outcome
 
         worker = get_current_worker()
         self.app.call_from_thread(self._busy, generation)
@@ -73,8 +73,8 @@ class Working:
             self.app.call_from_thread(self._say, f"could not list options and prices: {err}", True)
 
     def _load_extras(self) -> None:
-        from sources.prices import load_book
-        from sources.registry import catalogue
+        from co2routes.sources.prices import load_book
+        from co2routes.sources.registry import catalogue
 
         routes = self.routes if self.routes is not None else catalogue().routes
         self.book = load_book()
@@ -84,7 +84,7 @@ class Working:
     @work(exclusive=True, thread=True, group="charts")
     def redraw_charts(self, outcome: Any, generation: int) -> None:
         """Work out the cost-against-batch sweep and the saturation line (thread worker)."""
-        from tui.compute import breakthrough_points, demand_sweep, saturation_curve
+        from co2routes.tui.compute import breakthrough_points, demand_sweep, saturation_curve
 
         worker = get_current_worker()
         curves: dict[str, Any] = {}

@@ -9,4 +9,4 @@ def css_of(module_file: str, name: str | None = None) -> str:
     from pathlib import Path
 
     name = name or Path(module_file).with_suffix(".tcss").name
-    return resources.files("tui.widgets").joinpath(name).read_text(encoding="utf-8")
+    return resources.files("co2routes.tui.widgets").joinpath(name).read_text(encoding="utf-8")

@@ -1,5 +1,5 @@
 """Charts drawn in the terminal with textual-plotext. Each takes data already computed by a
-worker (see :mod:`tui.compute`) and only draws it; an empty chart says why it is empty.
+worker (see :mod:`co2routes.tui.compute`) and only draws it; an empty chart says why it is empty.
 
 Titles and axis labels are kept short, the unit on its axis: plotext leaves out a title or label
 wider than the chart, and these charts are often narrow."""
@@ -11,7 +11,7 @@ from typing import Any, Sequence
 
 from textual_plotext import PlotextPlot
 
-from tui.widgets import css_of
+from co2routes.tui.widgets import css_of
 
 _CSS = css_of(__file__)
 
@@ -43,7 +43,7 @@ class CostCurve(_Chart):
     """Cost per kg of every route against the CO2 per batch (log scale on the batch axis)."""
 
     def draw(self, sweep: Any, current_kg: float | None = None) -> None:
-        """Draw a :class:`tui.compute.Sweep`; the scenario's own batch size is a vertical line."""
+        """Draw a :class:`co2routes.tui.compute.Sweep`; the scenario's own batch size is a vertical line."""
         if sweep is None or not sweep.cost_per_kg:
             self.empty("cost per kg against batch size: no routes to draw")
             return
@@ -74,7 +74,7 @@ class SaturationPlot(_Chart):
     """The CO2 liquid-vapour line with the condensing and storage points marked."""
 
     def draw(self, curve: Any) -> None:
-        """Draw a :class:`tui.compute.SaturationCurve` (pressure in bar, temperature in degC)."""
+        """Draw a :class:`co2routes.tui.compute.SaturationCurve` (pressure in bar, temperature in degC)."""
         if curve is None:
             self.empty("saturation line: not worked out yet")
             return
@@ -93,7 +93,7 @@ class BreakthroughPlot(_Chart):
     """The dryer's outlet water against time on stream."""
 
     def draw(self, points: tuple[Sequence[float], Sequence[float], str] | None) -> None:
-        """Draw ``(hours, values, y label)`` from :func:`tui.compute.breakthrough_points`."""
+        """Draw ``(hours, values, y label)`` from :func:`co2routes.tui.compute.breakthrough_points`."""
         if points is None:
             self.empty("breakthrough curve: no dryer, or not worked out yet")
             return

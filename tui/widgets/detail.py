@@ -1,5 +1,5 @@
 """The selected route in full: the batch as bought, heat, raw gas and dryer, delivery, costs,
-the cost-against-batch chart for every route, and the what-if tabs (:mod:`tui.widgets.whatif`).
+the cost-against-batch chart for every route, and the what-if tabs (:mod:`co2routes.tui.widgets.whatif`).
 The cautions sit in their own panel beside it (:class:`CautionPanel`) so they stay on screen
 whichever tab is open.
 
@@ -19,12 +19,12 @@ from textual.app import ComposeResult
 from textual.containers import Horizontal, Vertical, VerticalScroll
 from textual.widgets import Static, TabbedContent, TabPane
 
-from sources.compare import heat_words
-from thermo.cautions import LOCAL_CODES
-from tui.output import format_value, label_of
-from tui.widgets import css_of
-from tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, SaturationPlot
-from tui.widgets.whatif import SpreadPanel, TornadoPanel
+from co2routes.sources.compare import heat_words
+from co2routes.thermo.cautions import LOCAL_CODES
+from co2routes.tui.output import format_value, label_of
+from co2routes.tui.widgets import css_of
+from co2routes.tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, SaturationPlot
+from co2routes.tui.widgets.whatif import SpreadPanel, TornadoPanel
 
 #: The tabs, in order: (id, title). Digits 1-7 pick them.
 TABS = (("t-batch", "Batch"), ("t-gas", "Gas & dryer"), ("t-delivery", "Delivery"),
@@ -243,7 +243,7 @@ class RouteDetail(Vertical):
 
     def show(self, row: Any | None, currency: str, end_product: str, curve: Any = None) -> None:
         """Fill every tab from ``row`` (a comparison row), or say that nothing is selected;
-        ``curve`` is its dryer's breakthrough curve (:func:`tui.compute.breakthrough_points`)."""
+        ``curve`` is its dryer's breakthrough curve (:func:`co2routes.tui.compute.breakthrough_points`)."""
         if row is None:
             for name in ("recipe", "gas", "delivery", "costs"):
                 self.query_one(f"#{name}", Static).update(Text("no route to show", style="dim"))

@@ -18,9 +18,9 @@ from textual.message import Message
 from textual.suggester import SuggestFromList
 from textual.widgets import Input, Label, Static
 
-from tui.fields import Field
-from tui.session import value_at
-from tui.widgets import css_of
+from co2routes.tui.fields import Field
+from co2routes.tui.session import value_at
+from co2routes.tui.widgets import css_of
 
 
 @dataclass

@@ -1,6 +1,6 @@
 """The ranking: every route in one table, sortable by each criterion, and the weights line.
 
-The table shows the numbers of :class:`sources.compare.Comparison` rows as they are; sorting only
+The table shows the numbers of :class:`co2routes.sources.compare.Comparison` rows as they are; sorting only
 changes the order shown, never the rank (which comes from the weighted score). Moving the cursor
 selects a route (:class:`RouteChosen`); ``+`` / ``-`` change the weight of the criterion the
 table is sorted by (:class:`WeightNudged`).
@@ -17,7 +17,7 @@ from textual.binding import Binding
 from textual.message import Message
 from textual.widgets import DataTable
 
-from tui.widgets import css_of
+from co2routes.tui.widgets import css_of
 
 
 @dataclass

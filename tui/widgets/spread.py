@@ -1,9 +1,9 @@
 """The spread chart: every route's Monte Carlo cost per kg as a box, or one route's histogram.
 
-Draws a :class:`sources.uncertainty.Uncertainty` (it does no computing). Box: P10 to P90, the
+Draws a :class:`co2routes.sources.uncertainty.Uncertainty` (it does no computing). Box: P10 to P90, the
 median marked, whiskers at the 2.5th and 97.5th percentiles of the samples. Mount and call::
 
-    from tui.widgets.spread import Spread
+    from co2routes.tui.widgets.spread import Spread
     yield Spread(id="spread")
     ...
     self.query_one(Spread).draw(uncertainty_result)              # a box per route

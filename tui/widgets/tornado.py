@@ -1,10 +1,10 @@
 """The tornado chart: one route's inputs swung one at a time, the widest swing on top.
 
-Draws a :class:`sources.sensitivity.RouteSensitivity` (it does no computing): for each input, one
+Draws a :class:`co2routes.sources.sensitivity.RouteSensitivity` (it does no computing): for each input, one
 line holding a bar from the nominal cost per kg to the cost with the input at its low end and
 another to the cost at its high end, as differences from the nominal cost. Mount it anywhere and call :meth:`draw`::
 
-    from tui.widgets.tornado import Tornado
+    from co2routes.tui.widgets.tornado import Tornado
     yield Tornado(id="tornado")
     ...
     self.query_one(Tornado).draw(route_sensitivity, currency="EUR")
@@ -58,7 +58,7 @@ class Tornado(PlotextPlot):
         self.refresh()
 
     def draw(self, route: Any, currency: str = "") -> None:
-        """Draw a :class:`sources.sensitivity.RouteSensitivity`."""
+        """Draw a :class:`co2routes.sources.sensitivity.RouteSensitivity`."""
         if route is None or route.cost_per_kg is None:
             self.empty("sensitivity: the cost is unknown (a price is missing)")
             return

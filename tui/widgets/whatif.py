@@ -1,6 +1,6 @@
 """The two what-if tabs of the route detail: the chosen route's tornado (one input swung at a time)
 and the spread of every route's cost per kg from a Monte Carlo run, with the chosen route's
-histogram. They only show results worked out by the screen's workers (:mod:`tui.screens.whatif`).
+histogram. They only show results worked out by the screen's workers (:mod:`co2routes.tui.screens.whatif`).
 """
 
 from __future__ import annotations
@@ -14,9 +14,9 @@ from textual.app import ComposeResult
 from textual.containers import VerticalScroll
 from textual.widgets import ProgressBar, Static
 
-from tui.widgets import css_of
-from tui.widgets.spread import Spread
-from tui.widgets.tornado import Tornado, short_name
+from co2routes.tui.widgets import css_of
+from co2routes.tui.widgets.spread import Spread
+from co2routes.tui.widgets.tornado import Tornado, short_name
 
 
 def span(low: float, high: float, unit: str) -> str:
@@ -26,7 +26,7 @@ def span(low: float, high: float, unit: str) -> str:
     >>> span(4.5, 7.5, "per kg"), span(0.85, 0.95, "1"), span(284.15, 294.15, "K")
     ('4.5 .. 7.5 per kg', '85 .. 95 %', '11 .. 21 degC')
     """
-    from tui.commands.sensitivity import _shown
+    from co2routes.tui.commands.sensitivity import _shown
 
     a, b = _shown(low, unit), _shown(high, unit)
     (a_num, _, a_unit), (b_num, _, b_unit) = a.partition(" "), b.partition(" ")
@@ -38,7 +38,7 @@ def span(low: float, high: float, unit: str) -> str:
 
 
 def swing_table(route: Any, currency: str) -> Table:
-    """Each input of a :class:`sources.sensitivity.RouteSensitivity`, widest swing first: its range
+    """Each input of a :class:`co2routes.sources.sensitivity.RouteSensitivity`, widest swing first: its range
     and the cost per kg at each end."""
     table = Table("input", "from .. to", f"{currency}/kg", box=None, pad_edge=False, show_edge=False,
                   header_style="bold")
@@ -71,7 +71,7 @@ class TornadoPanel(VerticalScroll):
         self.query_one(Tornado).empty("no sensitivity to draw")
 
     def show(self, route: Any, currency: str, ranges: str) -> None:
-        """Show a :class:`sources.sensitivity.RouteSensitivity`; ``ranges`` says where they came from."""
+        """Show a :class:`co2routes.sources.sensitivity.RouteSensitivity`; ``ranges`` says where they came from."""
         low, high = Tornado.LOW, Tornado.HIGH
         note = Text.assemble("one input at a time: ", (low, f"bold {low}"), " at its low end, ",
                              (high, f"bold {high}"), " at its high end; figures below")
@@ -117,7 +117,7 @@ class SpreadPanel(VerticalScroll):
         self.query_one("#spread-note", Static).update(Text(why, style="bold yellow"))
 
     def show(self, result: Any, route_id: str | None, stale: bool, key: str) -> None:
-        """Show a :class:`sources.uncertainty.Uncertainty`, with ``route_id``'s line and histogram;
+        """Show a :class:`co2routes.sources.uncertainty.Uncertainty`, with ``route_id``'s line and histogram;
         ``stale``: the inputs were edited after the run."""
         route = next((r for r in result.routes if r.route_id == route_id), None)
         cur = result.currency

@@ -1,0 +1,1 @@
+"""What a route plug-in imports: placeholder filled in by the plug-in API work."""
