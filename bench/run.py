@@ -324,7 +324,7 @@ def report(results: dict) -> str:
         f"{results['recompute_dry_ice']['end_product']}, so delivery is in the chain too): median "
         f"{results['recompute_dry_ice']['median_ms']:.2f} ms, p90 {results['recompute_dry_ice']['p90_ms']:.2f} ms.",
         "The bench calls the interface's own recompute (`co2routes.tui.compute.outcome`: validate, then "
-        "`co2routes.sources.compare.compare`, which adds each route's gas conditioning as it is written today).", "",
+        "`co2routes.sources.pipeline.compare`, which adds each route's gas conditioning as it is written today).", "",
         "## Monte Carlo", "",
         f"{mc['samples']:,} samples x {mc['routes']} routes, {mc['inputs']} uncertain inputs of which "
         f"{mc['non_price_inputs']} are not prices (each evaluated at 9 grid nodes per route it touches).", "",

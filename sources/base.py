@@ -12,7 +12,7 @@ Every quantity here is SI (kg, K, Pa, s) except where a field name says otherwis
 from __future__ import annotations
 
 import re
-from dataclasses import dataclass, field
+from dataclasses import dataclass
 from typing import Any, Mapping, Protocol, runtime_checkable
 
 from co2routes.thermo.errors import InputError
@@ -222,10 +222,17 @@ class RawGas:
 
 @dataclass(frozen=True, slots=True)
 class RouteResult:
-    """The full answer of a route for one batch. Costs are filled by :func:`co2routes.sources.compare.evaluate`."""
+    """What a route computes for one batch, and nothing else.
 
-    route_id: str
-    label: str
+    The comparison adds the rest (the dryer, the delivery, the priced cost lines, the end product
+    and the route's id and label) in :class:`co2routes.sources.plan.PlannedRoute`; a route never sets them.
+
+    ``heat_kj`` is the batch's enthalpy change: positive, the batch takes heat in (it cools).
+    ``hazard`` is the route's own level, 1 (low) to 3 (high), with ``hazard_reason`` in words.
+    ``delivers`` says what the route hands over: ``"raw-gas"`` (to be dried, and compressed if the
+    end product asks), or ``"gas"``, ``"liquid"``, ``"dry-ice"`` when bought already in that form.
+    """
+
     co2_kg: float
     co2_generated_kg: float
     reagents: tuple[Reagent, ...]
@@ -234,53 +241,21 @@ class RouteResult:
     raw_gas: RawGas
     heat_kj: float
     temperature_change_k: float | None
-    water_g_per_kg_co2: float
     energy: Energy
     time_h: float
     hazard: int
     hazard_reason: str
     warnings: tuple[str, ...] = ()
     cautions: tuple[str, ...] = ()
-    costs: tuple[CostLine, ...] = ()
-    notes: tuple[str, ...] = field(default=())
-    #: what the route hands over: ``"raw-gas"`` (to be dried, and compressed if the end product
-    #: asks), or ``"gas"``, ``"liquid"``, ``"dry-ice"`` when it is bought already in that form.
+    notes: tuple[str, ...] = ()
     delivers: str = "raw-gas"
-    #: kg of end product (gas, liquid or dry ice) the batch yields after drying and delivery;
-    #: ``None`` means the CO2 delivered (``co2_kg``) is the product. Per-kg figures use it.
-    product_kg: float | None = None
-    #: the dryer sized for this route's raw gas (a :class:`co2routes.thermo.dryer.DryerResult`), if any
-    dryer: Any = None
-    #: compression / flash to the end product (a :class:`co2routes.sources.delivery.Delivery`), if any
-    delivery: Any = None
 
     @property
-    def per_kg_basis(self) -> float:
-        """The mass per-kg figures divide by [kg]: the end product, else the CO2 delivered."""
-        return self.co2_kg if self.product_kg is None else self.product_kg
+    def water_g_per_kg_co2(self) -> float:
+        """Water the raw gas carries per kg of CO2 [g/kg], from its mole fractions."""
+        from co2routes.sources.common import water_g_per_kg_co2
 
-    @property
-    def energy_kwh_per_kg(self) -> float:
-        """All energy used per kg of end product [kWh/kg]."""
-        return self.energy.total_kwh / self.per_kg_basis
-
-    @property
-    def reagent_kg_per_kg(self) -> float:
-        """Mass of everything bought per kg of end product [kg/kg]."""
-        return sum(r.mass_kg for r in self.reagents) / self.per_kg_basis
-
-    @property
-    def total_cost(self) -> float | None:
-        """Sum of the breakdown, ``None`` if any line's price is unknown."""
-        if any(line.cost is None for line in self.costs):
-            return None
-        return sum(line.cost for line in self.costs)  # type: ignore[misc]
-
-    @property
-    def cost_per_kg(self) -> float | None:
-        """Cost per kg of end product, ``None`` if any price is unknown."""
-        total = self.total_cost
-        return None if total is None else total / self.per_kg_basis
+        return water_g_per_kg_co2(self.raw_gas.mole_fractions)
 
 
 @runtime_checkable

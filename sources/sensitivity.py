@@ -22,6 +22,7 @@ from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
 from co2routes.sources.whatif import (SCENARIO_INPUTS, Distribution, Target, cost_model, evaluate_at, price_unit,
                             targets)
+from co2routes.sources.pipeline import RouteRefused
 from co2routes.thermo.errors import InputError
 
 
@@ -130,6 +131,8 @@ def sensitivity(scenario: Scenario, distributions: Mapping[str, Distribution] | 
     for route in chosen:
         try:
             out.append(route_sensitivity(route, scenario, distributions))
+        except RouteRefused as err:
+            failures.append(f"route {route.id!r} not applicable: {err.allowed}")
         except InputError:
             raise
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal

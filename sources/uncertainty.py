@@ -35,6 +35,7 @@ from co2routes.sources.base import Route
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
 from co2routes.sources.whatif import SCENARIO_INPUTS, Distribution, cost_model, evaluate_at, price_keys, targets
+from co2routes.sources.pipeline import RouteRefused
 from co2routes.thermo.errors import InputError
 
 #: Grid points per non-price input (the interpolation nodes).
@@ -77,7 +78,7 @@ class Uncertainty:
 
 def default_distributions(scenario: Scenario, routes: Sequence[Route]) -> dict[str, Distribution]:
     """Every known price the routes use, uniform over x0.75 .. x1.25 of its nominal value."""
-    from co2routes.sources.compare import evaluate
+    from co2routes.sources.pipeline import evaluate
 
     out: dict[str, Distribution] = {}
     for route in routes:
@@ -162,6 +163,8 @@ def uncertainty(scenario: Scenario, distributions: Mapping[str, Distribution] | 
                     table[:, g] = _line_basis(at, model, prices, book) * (model.basis_kg / at.basis_kg)
                     step()
                 curves.append((name, nodes, table))
+        except RouteRefused as err:
+            failures.append(f"route {route.id!r} not applicable: {err.allowed}")
         except InputError:
             raise
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal

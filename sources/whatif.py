@@ -24,7 +24,7 @@ entry per input, every quantity a string with units as elsewhere in the scenario
 ``lognormal`` takes the arithmetic mean and standard deviation of the quantity itself. A standard
 deviation of a temperature is a temperature difference (``"3 K"``, ``"3 delta_degC"``).
 
-**Cost lines.** A route's cost is ``sum(line.cost)`` over ``RouteResult.costs`` divided by
+**Cost lines.** A route's cost is ``sum(line.cost)`` over ``PlannedRoute.costs`` divided by
 the kg it is per (the end product, or the CO2 delivered); every line is its price's amount times a coefficient that does not depend on the
 price (a mass, a volume or an energy), so cost is exactly linear in each price.
 """
@@ -39,7 +39,8 @@ from typing import Any, Callable, Mapping, Sequence
 
 import numpy as np
 
-from co2routes.sources.base import Route, RouteResult, parse_options
+from co2routes.sources.base import Route, parse_options
+from co2routes.sources.plan import PlannedRoute
 from co2routes.sources.prices import Price, PriceBook, parse_price, reagent_cost, use_cost
 from co2routes.sources.scenario import Scenario
 from co2routes.thermo.errors import InputError
@@ -126,7 +127,7 @@ def price_unit(price: Price) -> str:
     return {"mass": "per kg", "volume": "per m3", "energy": "per J"}[price.per]
 
 
-def targets(route: Route, scenario: Scenario, result: RouteResult | None = None) -> dict[str, Target]:
+def targets(route: Route, scenario: Scenario, result: PlannedRoute | None = None) -> dict[str, Target]:
     """Every input that can move ``route``'s cost: the prices its lines use, its numeric options and
     the scenario-wide inputs of :data:`DEFAULT_SCENARIO_INPUTS` that are set. ``result`` (the nominal result) gives the price keys."""
     out: dict[str, Target] = {}
@@ -168,12 +169,12 @@ def _si_text(value: float, dimension: str) -> str:
     return f"{float(value)!r} {unit}"
 
 
-def evaluate_at(route: Route, scenario: Scenario, settings: Mapping[str, float]) -> RouteResult:
+def evaluate_at(route: Route, scenario: Scenario, settings: Mapping[str, float]) -> PlannedRoute:
     """``route``'s priced result with non-price inputs set (``{name: SI value}``).
 
     Inputs of another route are ignored; price inputs are not allowed here (see :class:`CostModel`).
     """
-    from co2routes.sources.compare import evaluate
+    from co2routes.sources.pipeline import evaluate
 
     options: dict[str, str] = {}
     prefix = f"options.{route.id}."
@@ -192,7 +193,7 @@ def evaluate_at(route: Route, scenario: Scenario, settings: Mapping[str, float])
 # --------------------------------------------------------------------------- cost lines
 
 
-def price_keys(result: RouteResult) -> tuple[str | None, ...]:
+def price_keys(result: PlannedRoute) -> tuple[str | None, ...]:
     """The price key of each line of ``result.costs`` (``None`` for a line not from a reagent or use).
 
     :func:`co2routes.sources.prices.cost_lines` writes reagents first, then uses, one line each.
@@ -214,7 +215,7 @@ class CostModel:
     ``costs`` are the nominal line costs (``None`` when unknown), ``keys`` each line's price key
     (``None``: fixed), ``per_unit`` each line's cost per unit of its price amount (the line cost
     with that price set to 1 per SI unit) [kg, m3 or J]; ``basis_kg`` what cost per kg divides by:
-    the end product when the result names it (``RouteResult.per_kg_basis``), else the CO2 [kg].
+    the end product when the result names it (``PlannedRoute.per_kg_basis``), else the CO2 [kg].
     """
 
     route_id: str
@@ -242,7 +243,7 @@ class CostModel:
         return total / self.basis_kg
 
 
-def cost_model(result: RouteResult, book: PriceBook) -> CostModel:
+def cost_model(result: PlannedRoute, book: PriceBook) -> CostModel:
     """Split ``result``'s costs into price-linear lines (see :class:`CostModel`)."""
     keys = price_keys(result)
     n_reagents = len(result.reagents)

@@ -58,7 +58,7 @@ def outcome(document: Mapping[str, Any], source: str, text: str | None = None,
     when it answers ``False`` (a newer edit has come in) nothing more is done and ``None`` is
     returned.
     """
-    from co2routes.sources.compare import compare
+    from co2routes.sources.pipeline import compare
     from co2routes.sources.scenario import validate
 
     start = time.perf_counter()
@@ -74,13 +74,13 @@ def demand_sweep(scenario: Any, routes: Sequence[Any] | None = None,
                  proceed: Callable[[], bool] | None = None) -> Sweep | None:
     """Cost per kg of each route when the batch is ``factor`` times the scenario's.
 
-    Each point is a full :func:`co2routes.sources.compare.compare` of the scenario at that batch size, so
+    Each point is a full :func:`co2routes.sources.pipeline.compare` of the scenario at that batch size, so
     the chart shows exactly what the ranking would at that demand. A batch size that a route
     refuses gives ``None`` for that route at that point. ``known`` is the comparison at the
     scenario's own size (factor 1), reused rather than worked out again; ``proceed`` is asked
     before each point, and ``False`` stops the sweep (``None`` is returned).
     """
-    from co2routes.sources.compare import compare
+    from co2routes.sources.pipeline import compare
     from co2routes.thermo.errors import InputError
 
     sizes = tuple(scenario.co2_kg * f for f in factors)

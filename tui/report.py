@@ -9,7 +9,8 @@ import csv
 import io
 from typing import Any, Mapping
 
-from co2routes.sources.compare import Comparison, batch_record, comparison_record
+from co2routes.sources.pipeline import Comparison
+from co2routes.sources.records import batch_record, comparison_record
 from co2routes.thermo.cautions import LOCAL_CODES
 
 #: The comparison's columns: (JSON key, heading, format).
@@ -134,6 +135,7 @@ def comparison_table(comparison: Comparison) -> str:
     for text, ids in grouped_warnings(record).items():
         lines.append(f"WARNING [{', '.join(ids)}]: {text}")
     lines += [f"caution: {c}" for c in record["cautions"]] + [f"caution: {LOCAL_CODES}"]
+    lines += [f"not applicable: {n['label']} ({n['id']}): {n['reason']}" for n in record["not_applicable"]]
     lines += [f"note: {f}" for f in record["failures"]]
     return "\n".join(lines)
 
@@ -146,6 +148,7 @@ def comparison_markdown(comparison: Comparison) -> str:
            f"End product: {record['end_product']}. Prices in {record['currency']}.", "",
            "| " + " | ".join(head) + " |", "|" + "|".join("---" for _ in head) + "|"]
     out += ["| " + " | ".join(row) + " |" for row in _rows(record)]
+    out += [f"- Not applicable: {n['label']} ({n['id']}): {n['reason']}" for n in record["not_applicable"]]
     out += ["", "Weights: " + ", ".join(f"{k} {v:g}" for k, v in record["weights"].items()) + ".", ""]
     out += ["## Dryer and delivery per route", ""]
     if record["end_product"] != "gas":

@@ -27,7 +27,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import (Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use)
-from co2routes.sources.common import temperature_change, water_g_per_kg_co2
+from co2routes.sources.common import temperature_change
 from co2routes.sources.routes._options import NamedDefaultOption, settings
 from co2routes.thermo import cautions
 from co2routes.thermo.errors import InputError
@@ -314,10 +314,9 @@ def compute(request: RouteRequest) -> RouteResult:
     notes.append(f"The batch {'takes heat in (it cools)' if heat > 0 else 'gives heat off (it warms)'}: "
                  f"{abs(heat):.4g} kJ.")
     return RouteResult(
-        route_id=ROUTE.id, label=ROUTE.label, co2_kg=request.co2_kg, co2_generated_kg=generated_kg,
+        co2_kg=request.co2_kg, co2_generated_kg=generated_kg,
         reagents=reagents, byproducts=tuple(byproducts), uses=tuple(uses), raw_gas=raw, heat_kj=heat,
-        temperature_change_k=batch.liquor_temperature_k - request.site.temperature_k,
-        water_g_per_kg_co2=water_g_per_kg_co2(fractions), energy=Energy(),
+        temperature_change_k=batch.liquor_temperature_k - request.site.temperature_k, energy=Energy(),
         time_h=generated_kg / (opt["gas_rate"] * 3600.0), hazard=hazard, hazard_reason=reason,
         warnings=tuple(warnings), cautions=(cautions.ACID, cautions.SPENT_LIQUOR, cautions.ASPHYXIATION),
         notes=tuple(notes))

@@ -11,7 +11,6 @@ do not suffice, the route says so and counts the hours it would take.
 from __future__ import annotations
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
-from co2routes.sources.common import water_g_per_kg_co2
 from co2routes.sources.routes.shared import R, kwh, percent, saturated
 from co2routes.sources.routes.sorbent_calcination import (BED_OPTIONS, KILN_HOURS, M_H2O, RELEASE_OPTIONS, kiln_gas,
                                                 load_bed, release, release_notes, spent_lime)
@@ -147,14 +146,13 @@ class BreathRoute:
             byproducts.append(Byproduct("kiln condensate", "H2O", kiln_condensate, "clean water from the kiln gas"))
         byproducts.append(spent_lime(rel, int(opt["cycles"])))
         return RouteResult(
-            route_id=self.id, label=self.label, co2_kg=request.co2_kg,
+            co2_kg=request.co2_kg,
             co2_generated_kg=exhaled_mol * M_CO2,
             reagents=rel.reagents, byproducts=tuple(byproducts),
             uses=rel.uses + (Use("electricity for the fan", fan_kwh, "energy_kwh", "electricity"),),
             raw_gas=RawGas(raw, site.temperature_k, site.pressure_pa),
             heat_kj=rel.kiln_heat_j / 1000.0,
             temperature_change_k=None,
-            water_g_per_kg_co2=water_g_per_kg_co2(raw),
             energy=energy,
             time_h=max(needed_s, 0.0) / 3600.0 + KILN_HOURS,
             hazard=hazard,

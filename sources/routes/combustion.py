@@ -13,7 +13,7 @@ credit at the price book's ``heat`` price.
 from __future__ import annotations
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
-from co2routes.sources.common import normalised, water_g_per_kg_co2
+from co2routes.sources.common import normalised
 from co2routes.sources.routes.shared import YES_NO, kwh, percent, saturated
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
@@ -106,7 +106,7 @@ class CombustionRoute:
         ) + ((f"Separation: {sep_kwh / request.co2_kg:.3f} kWh per kg CO2 at {percent(float(opt['second_law_efficiency']))} "
               f"of the least work from {percent(y_flue)} CO2.",) if capture else ())
         return RouteResult(
-            route_id=self.id, label=self.label, co2_kg=request.co2_kg,
+            co2_kg=request.co2_kg,
             co2_generated_kg=fuel_mol * co2_flue * M_CO2,
             reagents=tuple(reagents),
             byproducts=(Byproduct("flue condensate", "H2O", condensate_kg,
@@ -115,7 +115,6 @@ class CombustionRoute:
             raw_gas=RawGas(raw, site.temperature_k, site.pressure_pa),
             heat_kj=-heat_j / 1000.0,
             temperature_change_k=None,
-            water_g_per_kg_co2=water_g_per_kg_co2(raw),
             energy=Energy(electricity_kwh=sep_kwh, fuel_kwh=fuel_kwh),
             time_h=fuel_kwh / (float(opt["burner_power"]) / 1000.0),
             hazard=3,

@@ -21,7 +21,6 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
-from co2routes.sources.common import water_g_per_kg_co2
 from co2routes.sources.routes._options import NamedDefaultOption, settings
 from co2routes.thermo import cautions
 from co2routes.thermo.errors import InputError
@@ -167,10 +166,10 @@ def compute(request: RouteRequest) -> RouteResult:
                 Reagent("dry yeast", "yeast", yeast_kg, yeast_kg, None, "yeast"))
     uses = (Use("water for the must", batch.water_kg / 1000.0, "volume_m3", "water"),)
     return RouteResult(
-        route_id=ROUTE.id, label=ROUTE.label, co2_kg=request.co2_kg, co2_generated_kg=generated,
+        co2_kg=request.co2_kg, co2_generated_kg=generated,
         reagents=reagents, byproducts=byproducts, uses=uses,
         raw_gas=RawGas(fractions, batch.temperature_k, request.site.pressure_pa),
-        heat_kj=batch.heat_kj, temperature_change_k=None, water_g_per_kg_co2=water_g_per_kg_co2(fractions),
+        heat_kj=batch.heat_kj, temperature_change_k=None,
         energy=Energy(), time_h=hours, hazard=1,
         hazard_reason="food-grade sugar and yeast; the CO2 and ethanol vapour must be vented",
         warnings=tuple(warnings), cautions=(cautions.FERMENTER, cautions.ASPHYXIATION), notes=tuple(notes))

@@ -15,7 +15,6 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult
-from co2routes.sources.common import water_g_per_kg_co2
 from co2routes.sources.routes._options import settings
 from co2routes.thermo import cautions
 from co2routes.thermo.errors import InputError
@@ -77,10 +76,9 @@ def compute(request: RouteRequest) -> RouteResult:
         held = (cautions.PRESSURE, cautions.CYLINDER_HEAT, cautions.ASPHYXIATION)
         hazard, reason = 2, "a high-pressure cylinder (about 57 bar at 20 degC) must be secured and kept cool"
     return RouteResult(
-        route_id=ROUTE.id, label=ROUTE.label, co2_kg=request.co2_kg, co2_generated_kg=bought,
+        co2_kg=request.co2_kg, co2_generated_kg=bought,
         reagents=(Reagent(label, "CO2", bought, bought, None, price_key),), byproducts=(), uses=(),
-        raw_gas=raw, heat_kj=0.0, temperature_change_k=None,
-        water_g_per_kg_co2=water_g_per_kg_co2(fractions), energy=Energy(),
+        raw_gas=raw, heat_kj=0.0, temperature_change_k=None, energy=Energy(),
         time_h=opt["transport_time"] / 3600.0, hazard=hazard,
         hazard_reason=reason, warnings=tuple(warnings), cautions=held, notes=tuple(notes),
         delivers=delivers)

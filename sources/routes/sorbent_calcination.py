@@ -14,7 +14,6 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Site, Use
-from co2routes.sources.common import water_g_per_kg_co2
 from co2routes.sources.routes.shared import R, kwh, percent, saturated
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
@@ -238,7 +237,7 @@ class SorbentCalcinationRoute:
         energy = Energy(rel.energy.electricity_kwh + fan_kwh, rel.energy.fuel_kwh, rel.energy.heat_kwh)
         hazard = 3 if opt["kiln_heat"] == "natural-gas" else 2
         return RouteResult(
-            route_id=self.id, label=self.label, co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
+            co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
             reagents=rel.reagents,
             byproducts=((Byproduct("kiln condensate", "H2O", condensate, "clean water from the kiln gas"),)
                         if condensate > 0 else ()) + (spent_lime(rel, int(opt["cycles"])),),
@@ -246,7 +245,6 @@ class SorbentCalcinationRoute:
             raw_gas=RawGas(raw, site.temperature_k, site.pressure_pa),
             heat_kj=rel.kiln_heat_j / 1000.0,
             temperature_change_k=None,
-            water_g_per_kg_co2=water_g_per_kg_co2(raw),
             energy=energy,
             time_h=load_s / 3600.0 + KILN_HOURS,
             hazard=hazard,

@@ -11,7 +11,7 @@ show why this route ranks last for air, and where flue gas makes it merely poor.
 from __future__ import annotations
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
-from co2routes.sources.common import temperature_change, water_g_per_kg_co2
+from co2routes.sources.common import temperature_change
 from co2routes.sources.routes.shared import YES_NO, R, kwh, percent, saturated
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
@@ -132,7 +132,7 @@ class WaterAbsorptionRoute:
             f"{temperature_change(desorb_j / 1000.0, water_kg, WATER_CP):+.2g} K: spread over so much water both are tiny.",
         )
         return RouteResult(
-            route_id=self.id, label=self.label, co2_kg=request.co2_kg,
+            co2_kg=request.co2_kg,
             co2_generated_kg=dissolved_co2 * M_CO2,
             reagents=(), byproducts=byproducts, uses=tuple(uses),
             raw_gas=RawGas(raw, t, p),
@@ -140,7 +140,6 @@ class WaterAbsorptionRoute:
             # the release step's heat (gas and vapour leaving the water) spread over the water
             # released, so the sign agrees with heat_kj; absorption's warming is in the notes
             temperature_change_k=temperature_change(desorb_j / 1000.0, water_kg, WATER_CP),
-            water_g_per_kg_co2=water_g_per_kg_co2(raw),
             energy=Energy(electricity_kwh=elec_kwh, heat_kwh=kwh(warm_j)),
             time_h=water_m3 / float(opt["water_flow"]) / 3600.0,
             hazard=1,

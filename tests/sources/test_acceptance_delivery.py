@@ -23,7 +23,8 @@ from chemicals.iapws import iapws95_Psat
 
 from co2routes.sources.base import RouteRequest, parse_options
 from co2routes.sources.delivery import storage_loss_kg
-from co2routes.sources.compare import compare, evaluate, row_record
+from co2routes.sources.pipeline import compare, evaluate
+from co2routes.sources.records import row_record
 from co2routes.sources.prices import cost_lines
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import demo, validate

@@ -11,7 +11,7 @@ from importlib.metadata import EntryPoint
 import pytest
 
 from co2routes.sources import registry
-from co2routes.sources.compare import compare, evaluate
+from co2routes.sources.pipeline import compare, evaluate
 from co2routes.sources.registry import GROUP, catalogue
 from co2routes.sources.scenario import demo
 

@@ -1,16 +1,18 @@
 """Ranking: weights, unknown values count as worst, scores in [0, 1]."""
 
 from co2routes.sources.base import Energy, RawGas, RouteResult, CostLine
-from co2routes.sources.compare import rank
+from co2routes.sources.plan import PlannedRoute
+from co2routes.sources.rank import rank
 
 
 def _result(rid, cost, hazard=1, purity=1.0):
-    return RouteResult(
-        route_id=rid, label=rid, co2_kg=1.0, co2_generated_kg=1.0, reagents=(), byproducts=(),
+    made = RouteResult(
+        co2_kg=1.0, co2_generated_kg=1.0, reagents=(), byproducts=(),
         uses=(), raw_gas=RawGas({"CO2": purity, "H2O": 1 - purity}, 293.15), heat_kj=0.0,
-        temperature_change_k=None, water_g_per_kg_co2=0.0, energy=Energy(), time_h=1.0,
-        hazard=hazard, hazard_reason="", costs=(CostLine("x", 1, "kg", cost, cost),),
+        temperature_change_k=None, energy=Energy(), time_h=1.0, hazard=hazard, hazard_reason="",
     )
+    return PlannedRoute(rid, rid, made, product_kg=1.0, uses=(), energy=Energy(), time_h=1.0,
+                        costs=(CostLine("x", 1, "kg", cost, cost),))
 
 
 def test_cheapest_wins_on_cost_alone():

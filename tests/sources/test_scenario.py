@@ -88,7 +88,7 @@ def test_read_only_folder_is_an_input_error(tmp_path):
 
 
 def test_dry_ice_hold_time_adds_the_box_loss_to_what_is_made():
-    from co2routes.sources.compare import evaluate
+    from co2routes.sources.pipeline import evaluate
     from co2routes.sources.registry import catalogue
 
     base = sc.validate({"demand": "3 kg", "end_product": "dry-ice", "site": {"temperature": "20 degC"}})

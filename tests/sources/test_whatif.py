@@ -17,7 +17,7 @@ import math
 import numpy as np
 import pytest
 
-from co2routes.sources.compare import compare, evaluate
+from co2routes.sources.pipeline import compare, evaluate
 from co2routes.sources.sensitivity import sensitivity, sensitivity_record
 from co2routes.sources.uncertainty import uncertainty, uncertainty_record
 from co2routes.sources.whatif import Distribution, cost_model, parse_uncertain

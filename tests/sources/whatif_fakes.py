@@ -32,13 +32,13 @@ class FakeRoute:
         feed = self.feed_per_kg * request.co2_kg / eff
         kwh = 0.1 * request.co2_kg * (1.0 + (t - 293.15) / 100.0)
         return RouteResult(
-            route_id=self.id, label=self.label, co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
+            co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
             reagents=(Reagent("feed", "X", feed, feed, None, self.feed_key),),
             byproducts=(),
             uses=(Use("electricity", kwh, "energy_kwh", "electricity"),
                   Use("disposal", 0.5, "mass_kg", "disposal")),
             raw_gas=RawGas({"CO2": 0.9, "H2O": 0.1}, t), heat_kj=0.0, temperature_change_k=None,
-            water_g_per_kg_co2=10.0, energy=Energy(electricity_kwh=kwh), time_h=1.0, hazard=1,
+            energy=Energy(electricity_kwh=kwh), time_h=1.0, hazard=1,
             hazard_reason="fake", cautions=("fake caution",),
         )
 

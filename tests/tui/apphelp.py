@@ -4,7 +4,7 @@ from __future__ import annotations
 
 from pathlib import Path
 
-from co2routes.sources.compare import compare
+from co2routes.sources.pipeline import compare
 from co2routes.sources.scenario import to_toml, validate
 
 
@@ -32,7 +32,7 @@ def table_cells(app, route_id: str) -> list[str]:
 
 
 def expected(document, routes):
-    """What co2routes.sources.compare.compare says for ``document`` (the other face of the numbers)."""
+    """What co2routes.sources.pipeline.compare says for ``document`` (the other face of the numbers)."""
     return compare(validate(document, "test"), routes)
 
 

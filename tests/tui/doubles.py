@@ -2,7 +2,7 @@
 
 They are NOT route models (the real ones live in sources/routes); they exist so the interface
 tests can run whatever routes happen to be registered, and so the numbers they produce can be
-checked against co2routes.sources.compare.compare on the same objects. Their only "physics" is a fixed
+checked against co2routes.sources.pipeline.compare on the same objects. Their only "physics" is a fixed
 mass ratio, chosen so that the two routes trade places when demand or a price changes.
 """
 
@@ -25,11 +25,11 @@ class LinearRoute:
         mass = self.ratio * request.co2_kg
         water = 1.0 - self.purity
         return RouteResult(
-            route_id=self.id, label=self.label, co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
+            co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
             reagents=(Reagent(self.price_key, "X", mass, mass, None, self.price_key),),
             byproducts=(), uses=(Use("electricity", self.fixed_kwh, "energy_kwh", "electricity"),),
             raw_gas=RawGas({"CO2": self.purity, "H2O": water}, request.site.temperature_k),
-            heat_kj=-10.0 * request.co2_kg, temperature_change_k=None, water_g_per_kg_co2=water * 409.0,
+            heat_kj=-10.0 * request.co2_kg, temperature_change_k=None,
             energy=Energy(electricity_kwh=self.fixed_kwh), time_h=2.0 + self.hazard,
             hazard=self.hazard, hazard_reason="test double", cautions=("Test caution sentence.",),
             delivers=self.delivers,

@@ -1,4 +1,4 @@
-"""Editing: the ranking follows co2routes.sources.compare.compare; a refused entry is marked and the last
+"""Editing: the ranking follows co2routes.sources.pipeline.compare; a refused entry is marked and the last
 good results stay."""
 
 from __future__ import annotations

@@ -18,7 +18,7 @@ async def test_start_up_shows_every_registered_route():
         await settle(pilot)
         planner = app.planner
         want = expected(planner.document, None)
-        # same routes, same order as co2routes.sources.compare.compare (the command line's face)
+        # same routes, same order as co2routes.sources.pipeline.compare (the command line's face)
         assert table_ids(app) == [row.result.route_id for row in want.rows]
         assert {r.result.route_id for r in want.rows} == {r.id for r in catalogue().routes} - {
             f.split("'")[1] for f in want.failures if "'" in f}

@@ -5,7 +5,7 @@ from __future__ import annotations
 import dataclasses
 
 from doubles import routes as doubles
-from co2routes.sources.compare import compare
+from co2routes.sources.pipeline import compare
 from co2routes.sources.scenario import demo
 from co2routes.thermo import co2
 from co2routes.tui.compute import breakthrough_points, demand_sweep, outcome, saturation_curve

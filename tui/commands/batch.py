@@ -22,7 +22,8 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The recipe's JSON record."""
-    from co2routes.sources.compare import batch_record, check_option_tables, evaluate
+    from co2routes.sources.records import batch_record
+    from co2routes.sources.pipeline import check_option_tables, evaluate
     from co2routes.sources.registry import catalogue
     from co2routes.sources.scenario import demo, load
     from co2routes.thermo.errors import InputError

@@ -44,7 +44,8 @@ def load_scenario(args: argparse.Namespace):
 
 def run(args: argparse.Namespace) -> dict:
     """The comparison as its JSON record (the table and other formats come from ``render``)."""
-    from co2routes.sources.compare import compare, comparison_record
+    from co2routes.sources.pipeline import compare
+    from co2routes.sources.records import comparison_record
 
     comparison = compare(load_scenario(args))
     args._comparison = comparison

@@ -21,7 +21,7 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The reaction's JSON answer."""
-    from co2routes.sources.compare import heat_words
+    from co2routes.sources.records import heat_words
     from co2routes.thermo import cautions
     from co2routes.thermo.reaction import parse_reaction, reaction_enthalpy
     from co2routes.thermo.units import parse

@@ -135,7 +135,7 @@ class Filing:
 
     def ranking_text(self, fmt: str) -> str:
         """The ranking as the command line's ``compare --markdown/--csv/--json`` prints it."""
-        from co2routes.sources.compare import comparison_record
+        from co2routes.sources.records import comparison_record
         from co2routes.tui.report import comparison_csv, comparison_markdown
 
         comparison = self.outcome.comparison
@@ -147,7 +147,7 @@ class Filing:
 
     def recipe_text(self, fmt: str) -> str:
         """The chosen route's batch as ``batch --markdown/--csv/--json`` prints it."""
-        from co2routes.sources.compare import batch_record
+        from co2routes.sources.records import batch_record
         from co2routes.tui.report import recipe_csv, recipe_markdown
 
         row = self.selected_row()

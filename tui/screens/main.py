@@ -152,13 +152,13 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self._weights_line()
         self._show_selected()
         self._title()
-        note = f"; {len(comparison.failures)} route(s) left out: " + " | ".join(comparison.failures) \
-            if comparison.failures else ""
+        left_out = [f"{n.label}: {n.reason}" for n in comparison.not_applicable] + list(comparison.failures)
+        note = f"; {len(left_out)} route(s) not ranked: " + " | ".join(left_out) if left_out else ""
         ranked = f"{len(comparison.rows)} routes ranked in {outcome.seconds:.2f} s{note}"
         if self.notice:
             self._say(f"{self.notice} · {ranked}", True)
         else:
-            self._say(ranked, bool(comparison.failures))
+            self._say(ranked, bool(left_out))
         self.redraw_charts(outcome, generation)
         self.whatif_update()
 

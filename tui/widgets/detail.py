@@ -19,7 +19,7 @@ from textual.app import ComposeResult
 from textual.containers import Horizontal, Vertical, VerticalScroll
 from textual.widgets import Static, TabbedContent, TabPane
 
-from co2routes.sources.compare import heat_words
+from co2routes.sources.records import heat_words
 from co2routes.thermo.cautions import LOCAL_CODES
 from co2routes.tui.output import format_value, label_of
 from co2routes.tui.widgets import css_of

@@ -1,6 +1,6 @@
 """The ranking: every route in one table, sortable by each criterion, and the weights line.
 
-The table shows the numbers of :class:`co2routes.sources.compare.Comparison` rows as they are; sorting only
+The table shows the numbers of :class:`co2routes.sources.pipeline.Comparison` rows as they are; sorting only
 changes the order shown, never the rank (which comes from the weighted score). Moving the cursor
 selects a route (:class:`RouteChosen`); ``+`` / ``-`` change the weight of the criterion the
 table is sorted by (:class:`WeightNudged`).

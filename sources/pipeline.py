@@ -1,0 +1,134 @@
+"""The comparison's one pipeline: route -> dryer -> delivery -> prices, for every route.
+
+For each route: compute the batch (:class:`~co2routes.sources.base.RouteResult`), size its dryer
+from its raw gas, add delivery (compression, storage, dry ice) when the end product asks for it,
+price everything with the scenario's price book (:class:`~co2routes.sources.plan.PlannedRoute`),
+then rank (:mod:`co2routes.sources.rank`). A route that refuses the scenario (its own
+:class:`InputError`, e.g. a fermenter too cold) is listed as not applicable with its reason; the
+others are still ranked.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from typing import Mapping, Sequence
+
+from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use, parse_options
+from co2routes.sources.plan import NotApplicable, PlannedRoute
+from co2routes.sources.prices import cost_lines
+from co2routes.sources.rank import RouteRow, rank
+from co2routes.sources.registry import catalogue
+from co2routes.sources.scenario import Scenario
+from co2routes.thermo.errors import InputError
+
+
+class RouteRefused(InputError):
+    """A route's own refusal of the scenario; the field names the route, the text the input."""
+
+
+@dataclass(frozen=True, slots=True)
+class Comparison:
+    """Every route's row, best first, the routes that cannot run with their reasons, the weights
+    used and any route that failed to load or crashed."""
+
+    scenario_name: str
+    end_product: str
+    currency: str
+    weights: Mapping[str, float]
+    rows: tuple[RouteRow, ...]
+    failures: tuple[str, ...]
+    not_applicable: tuple[NotApplicable, ...] = ()
+
+
+def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
+             options: Mapping[str, str] | None = None) -> PlannedRoute:
+    """One route's batch for ``scenario``: made, dried, delivered as the end product, priced.
+
+    ``co2_kg`` is the end product wanted (default the scenario's demand); ``options`` override
+    the scenario's options for this route. For dry ice the route is asked for the raw CO2 the
+    flash needs (:func:`co2routes.sources.delivery.raw_co2_needed`). The batch's time is the
+    longer of the route's and the compressor's (the compressor draws from a buffer while the gas
+    comes). A user's mistake in an option raises :class:`InputError`; the route's own refusal of
+    the scenario raises :class:`RouteRefused` naming the route.
+    """
+    from co2routes.sources.conditioning import condition
+    from co2routes.sources.delivery import plan_delivery, raw_co2_needed
+
+    given = dict(scenario.options.get(route.id, {}))
+    given.update(options or {})
+    parsed = parse_options(route, given)
+    product_kg = scenario.co2_kg if co2_kg is None else co2_kg
+
+    def run(kg: float) -> RouteResult:
+        try:
+            return route.compute(RouteRequest(co2_kg=kg, site=scenario.site, options=parsed,
+                                              end_product=scenario.end_product))
+        except RouteRefused:
+            raise
+        except InputError as err:
+            raise RouteRefused(f"route {route.id}", str(err)) from None
+
+    made = run(product_kg)
+    raw_kg, flash = raw_co2_needed(product_kg, scenario.end_product, made.delivers,
+                                   scenario.delivery, scenario.site)
+    if raw_kg != product_kg:
+        made = run(raw_kg)
+    dried = condition(made, scenario.dryer, scenario.site)
+    delivery = plan_delivery(product_kg, made.co2_kg, flash, scenario.end_product,
+                             made.delivers, scenario.delivery, scenario.site)
+    uses = made.uses + dried.uses
+    if delivery.electricity_kwh > 0:
+        uses += (Use("compression (electric motor)", delivery.electricity_kwh, "energy_kwh", "electricity"),)
+    energy = Energy(made.energy.electricity_kwh + dried.electricity_kwh + delivery.electricity_kwh,
+                    made.energy.fuel_kwh, made.energy.heat_kwh)
+    return PlannedRoute(
+        route_id=route.id, label=route.label, made=made, product_kg=product_kg, uses=uses,
+        energy=energy, time_h=max(made.time_h, delivery.time_h),
+        warnings=_unique(made.warnings + dried.warnings + delivery.warnings),
+        cautions=_unique(made.cautions + dried.cautions + delivery.cautions),
+        notes=_unique(made.notes + delivery.notes),
+        dryer=dried.dryer, delivery=delivery if scenario.end_product != "gas" else None,
+        costs=cost_lines(made.reagents, uses, scenario.prices))
+
+
+def _unique(items: Sequence[str]) -> tuple[str, ...]:
+    """``items`` without repeats, first occurrence kept."""
+    return tuple(dict.fromkeys(items))
+
+
+def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Comparison:
+    """Every route (default: every route found) for ``scenario``, ranked.
+
+    A route that refuses the scenario is listed in ``not_applicable`` with its reason; a route
+    that crashes is listed in ``failures``; neither stops the others.
+    """
+    cat = catalogue()
+    chosen = cat.routes if routes is None else tuple(routes)
+    check_option_tables(scenario, (*cat.routes, *chosen))
+    results: list[PlannedRoute] = []
+    refused: list[NotApplicable] = []
+    failures = list(cat.failures)
+    for route in chosen:
+        try:
+            results.append(evaluate(route, scenario))
+        except RouteRefused as err:
+            refused.append(NotApplicable(route.id, route.label, err.allowed))
+        except InputError:
+            raise
+        except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
+            failures.append(f"route {route.id!r} failed: {type(err).__name__}: {err}")
+    return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
+                      dict(scenario.weights), rank(results, scenario.weights), tuple(failures),
+                      tuple(refused))
+
+
+def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:
+    """Refuse an ``[options.ID]`` table of ``scenario`` whose ID is none of ``routes``' ids.
+
+    Without this a mistyped route id would leave that route on its defaults without a word.
+    """
+    known = {r.id for r in routes}
+    for route_id in scenario.options:
+        if route_id not in known:
+            raise InputError(f"scenario [options.{route_id}]",
+                             f"names no route found; routes are {', '.join(sorted(known))}")
