@@ -38,8 +38,8 @@ def _state_text(name1: str, value1: float, name2: str, value2: float, fluid: str
 def _failed(output: str, name1: str, value1: float, name2: str, value2: float, fluid: str) -> InputError:
     return InputError(
         "state", f"the equation of state could not be solved for {output} of "
-        f"{_state_text(name1, value1, name2, value2, fluid)} (too close to the critical point); "
-        "move the temperature or pressure a little away from it")
+        f"{_state_text(name1, value1, name2, value2, fluid)} (outside its range, or too close to "
+        "the critical point: move the temperature or pressure a little away from it)")
 
 
 def props(output: str, name1: str, value1: float, name2: str, value2: float, fluid: str = "CO2") -> float:
