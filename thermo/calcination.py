@@ -5,8 +5,15 @@ data) and dG(T) = g(CaO) + g(CO2) - g(CaCO3) from :mod:`co2routes.thermo.species
 McBride, Zehe and Gordon 2002, NASA TP-2002-211556). Above this pressure of CO2 calcite is
 stable; below it, it calcines.
 
-Valid range: 700-1200 K, the calcite polynomial ending at 1200 K. Pure, well-crystallised calcite;
-real limestone with impurities and fine grain calcines at slightly different temperatures.
+Valid range: 700-1373.15 K (427-1100 degC). The NASA calcite polynomial ends at 1200 K; above it
+calcite is carried on with a constant heat capacity, the polynomial's own cp at 1200 K
+(130.57 J/(mol K)): h(T) = h(1200) + cp (T - 1200), s(T) = s(1200) + cp ln(T/1200). Over
+1200-1373 K this changes dG by well under 1 kJ/mol for any cp from 125 to 135 J/(mol K). The
+result agrees with the correlation of Stanmore & Gilot (2005) "Review - calcination and
+carbonation of limestone during thermal cycling for CO2 sequestration", Fuel Process. Technol.
+86, 1707: p = 4.137e12 exp(-20474/T) Pa, within 5 % at 600, 900 and 1100 degC, and with Baker
+(1962) within 25 % (see tests). Pure, well-crystallised calcite; real limestone with impurities
+and fine grain calcines at slightly different temperatures.
 
 >>> round(calcination_temperature(101325.0).temperature_k, 1)
 1167.2
@@ -23,7 +30,8 @@ from co2routes.thermo.errors import InputError
 R = 8.314462618  # J/(mol K), CODATA 2018
 P0 = 1e5  # Pa, standard pressure of the NASA data
 T_MIN = 700.0  # K
-T_MAX = 1200.0  # K
+T_MAX = 1373.15  # K (1100 degC), calcite extended above 1200 K
+CALCITE_DATA_MAX_K = 1200.0  # K, end of the NASA calcite polynomial
 EQUATION = "CaCO3(s) -> CaO(s) + CO2(g)"
 
 
@@ -44,12 +52,13 @@ class CalcinationPoint:
 def delta_g(temperature: float) -> float:
     """Standard Gibbs energy of CaCO3(s) -> CaO(s) + CO2(g) [J/mol] at 1 bar.
 
-    dG(T) = g_CaO(T) + g_CO2(T) - g_CaCO3(T), g = h - T s.
+    dG(T) = g_CaO(T) + g_CO2(T) - g_CaCO3(T), g = h - T s; calcite above 1200 K with the
+    constant heat capacity of the module text.
 
     Parameters
     ----------
     temperature : float
-        Temperature [K], 700-1200 K.
+        Temperature [K], 700-1373.15 K.
 
     Source: NASA polynomials through Cantera (McBride, Zehe and Gordon 2002).
 
@@ -60,8 +69,23 @@ def delta_g(temperature: float) -> float:
     return (
         species.gibbs("CaO(s)", temperature)
         + species.gibbs("CO2(g)", temperature)
-        - species.gibbs("CaCO3(s)", temperature)
+        - calcite_g_h(temperature)[0]
     )
+
+
+def calcite_g_h(temperature: float) -> tuple[float, float]:
+    """(g, h) of calcite [J/mol]: NASA to 1200 K, constant cp = cp(1200 K) above (module text).
+
+    >>> round(calcite_g_h(1373.15)[1] / 1000, 1)
+    -1082.4
+    """
+    if temperature <= CALCITE_DATA_MAX_K:
+        return species.gibbs("CaCO3(s)", temperature), species.enthalpy("CaCO3(s)", temperature)
+    t0 = CALCITE_DATA_MAX_K
+    cp = float(species.cantera_species("CaCO3(s)").thermo.cp(t0)) / 1000.0
+    h = species.enthalpy("CaCO3(s)", t0) + cp * (temperature - t0)
+    s_ = species.entropy("CaCO3(s)", t0) + cp * math.log(temperature / t0)
+    return h - temperature * s_, h
 
 
 def co2_pressure_over_calcite(temperature: float) -> CalcinationPoint:
@@ -72,7 +96,7 @@ def co2_pressure_over_calcite(temperature: float) -> CalcinationPoint:
     Parameters
     ----------
     temperature : float
-        Temperature [K], 700-1200 K (raises InputError outside).
+        Temperature [K], 700-1373.15 K (raises InputError outside).
 
     Source: NASA polynomials (McBride et al. 2002); agrees with Baker (1962), J. Chem. Soc. 464,
     dG = 38,000 - 32.4 T cal/mol: 1 atm at 1167 K here against 1173 K there, pressures within
@@ -86,7 +110,7 @@ def co2_pressure_over_calcite(temperature: float) -> CalcinationPoint:
     dh = (
         species.enthalpy("CaO(s)", temperature)
         + species.enthalpy("CO2(g)", temperature)
-        - species.enthalpy("CaCO3(s)", temperature)
+        - calcite_g_h(temperature)[1]
     )
     return CalcinationPoint(float(temperature), p, dg, dh)
 
@@ -100,8 +124,8 @@ def calcination_temperature(co2_pressure: float) -> CalcinationPoint:
     Parameters
     ----------
     co2_pressure : float
-        CO2 partial pressure [Pa], between the equilibrium pressures at 700 and 1200 K
-        (about 0.0007 Pa to 2.4 bar).
+        CO2 partial pressure [Pa], between the equilibrium pressures at 700 and 1373.15 K
+        (about 0.0007 Pa to 13 bar).
 
     Source: as :func:`co2_pressure_over_calcite`.
 
@@ -118,7 +142,7 @@ def calcination_temperature(co2_pressure: float) -> CalcinationPoint:
         raise InputError(
             "co2 pressure",
             f"must lie between {p_lo:.3g} Pa and {p_hi:.3g} Pa (equilibrium at {T_MIN:.0f}-"
-            f"{T_MAX:.0f} K, the range of the calcite data)",
+            f"{T_MAX:.0f} K)",
             got=f"{co2_pressure:.4g} Pa",
         )
     for _ in range(80):
@@ -137,6 +161,6 @@ def _check_t(temperature: float) -> None:
         raise InputError(
             "temperature",
             f"must be {T_MIN:.0f}-{T_MAX:.0f} K ({T_MIN - 273.15:.0f}-{T_MAX - 273.15:.0f} degC), "
-            "the range of the calcite data",
+            "the range of the calcite data and their extension",
             got=f"{temperature:.2f} K",
         )

@@ -88,9 +88,9 @@ _ABOVE_CRITICAL = ("is above the critical point (304.1282 K, 7.3773 MPa): above 
 
 
 def _props(output: str, name1: str, value1: float, name2: str, value2: float) -> float:
-    from co2routes.thermo._lazy import coolprop
+    from co2routes.thermo.coolprop_safe import props
 
-    return float(coolprop().PropsSI(output, name1, value1, name2, value2, _FLUID))
+    return props(output, name1, value1, name2, value2, _FLUID)
 
 
 def saturation_at_temperature(temperature_k: float) -> Saturation:

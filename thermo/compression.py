@@ -24,7 +24,6 @@ from __future__ import annotations
 import math
 from dataclasses import dataclass
 
-from co2routes.thermo._lazy import coolprop
 from co2routes.thermo.errors import InputError, require_fraction, require_positive
 
 FLUID = "CO2"
@@ -198,17 +197,18 @@ def compress_stage(index: int, suction_pressure_pa: float, suction_temperature_k
     (121.2, 212)
     """
     require_fraction("efficiency", efficiency)
-    CP = coolprop()
-    h1 = CP.PropsSI("H", "P", suction_pressure_pa, "T", suction_temperature_k, FLUID)
-    s1 = CP.PropsSI("S", "P", suction_pressure_pa, "T", suction_temperature_k, FLUID)
-    d1 = CP.PropsSI("D", "P", suction_pressure_pa, "T", suction_temperature_k, FLUID)
-    h2s = CP.PropsSI("H", "P", discharge_pressure_pa, "S", s1, FLUID)
-    t2s = CP.PropsSI("T", "P", discharge_pressure_pa, "S", s1, FLUID)
+    from co2routes.thermo.coolprop_safe import props
+
+    h1 = props("H", "P", suction_pressure_pa, "T", suction_temperature_k, FLUID)
+    s1 = props("S", "P", suction_pressure_pa, "T", suction_temperature_k, FLUID)
+    d1 = props("D", "P", suction_pressure_pa, "T", suction_temperature_k, FLUID)
+    h2s = props("H", "P", discharge_pressure_pa, "S", s1, FLUID)
+    t2s = props("T", "P", discharge_pressure_pa, "S", s1, FLUID)
     w_s = h2s - h1
     w = w_s / efficiency
     h2 = h1 + w
-    t2 = CP.PropsSI("T", "P", discharge_pressure_pa, "H", h2, FLUID)
-    h2_state = CP.PropsSI("H", "P", discharge_pressure_pa, "T", t2, FLUID)
+    t2 = props("T", "P", discharge_pressure_pa, "H", h2, FLUID)
+    h2_state = props("H", "P", discharge_pressure_pa, "T", t2, FLUID)
     if cooled_temperature_k is None:
         cooler = "condenser"
         from co2routes.thermo.co2 import saturation_at_pressure
@@ -218,7 +218,7 @@ def compress_stage(index: int, suction_pressure_pa: float, suction_temperature_k
     else:
         cooler = "intercooler"
         t_out = cooled_temperature_k
-        h_out = CP.PropsSI("H", "P", discharge_pressure_pa, "T", t_out, FLUID)
+        h_out = props("H", "P", discharge_pressure_pa, "T", t_out, FLUID)
     q = h2_state - h_out
     return StageResult(
         index=index,

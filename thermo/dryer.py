@@ -32,7 +32,7 @@ import math
 from dataclasses import dataclass, field
 from typing import Mapping
 
-from co2routes.thermo import water
+from co2routes.thermo import water, water_co2
 from co2routes.thermo.co2 import ATMOSPHERE_PA, MOLAR_MASS as CO2_MOLAR_MASS
 from co2routes.thermo.desiccants import (DESICCANT_IDS, Desiccant, defaults, equilibrium_loading,
                                extrapolation_warning, get_desiccant, outlet_limit,
@@ -143,14 +143,16 @@ class DryerResult:
 def inlet_ppmv(inp: DryerInput) -> float:
     """Inlet water [ppmv] from whichever inlet field of ``inp`` is set (saturated when none).
 
-    ppmv = 1e6 RH p_sat(T)/P, 1e6 p_sat(T_dp)/P, as given, or 1e6 p_sat(T)/P (saturated); p_sat
-    from :mod:`co2routes.thermo.water` (IAPWS-95; Murphy & Koop 2005 below 0 degC).
+    ppmv = RH y_sat(T, P), y_sat(T_dp, P), as given, or y_sat(T, P) (saturated), with y_sat the
+    water CO2 holds at T and P from :func:`co2routes.thermo.water_co2.saturated_water_in_co2`
+    (Spycher, Pruess & Ennis-King 2003; the dry gas is treated as CO2, so at high pressure a
+    gas rich in air or nitrogen holds somewhat less than this).
 
-    >>> round(inlet_ppmv(DryerInput(1e-5, 298.15, inlet_relative_humidity=0.5)))
-    15642
+    >>> round(inlet_ppmv(DryerInput(1e-5, 298.15, inlet_relative_humidity=0.5)), -1)
+    15780.0
     """
     t, p = inp.inlet_temperature_k, inp.inlet_pressure_pa
-    p_sat = water.vapor_pressure(t)
+    y_sat = water_co2.saturated_water_in_co2(t, p).water_ppmv
     given = [n for n in ("inlet_water_ppmv", "inlet_relative_humidity", "inlet_dew_point_k")
              if getattr(inp, n) is not None]
     if len(given) > 1:
@@ -160,19 +162,19 @@ def inlet_ppmv(inp: DryerInput) -> float:
         rh = inp.inlet_relative_humidity
         if not 0.0 < rh <= 1.0:
             raise InputError("relative humidity", "must be above 0 and at most 100 %", got=f"{rh:.4g}")
-        return 1e6 * rh * p_sat / p
+        return rh * y_sat
     if inp.inlet_dew_point_k is not None:
         if inp.inlet_dew_point_k > t + 1e-9:
             raise InputError("inlet dew point", "cannot be above the inlet temperature (the gas "
                              "would hold liquid water)", got=inp.inlet_dew_point_k)
-        return water.ppmv_from_dew_point(inp.inlet_dew_point_k, p)
+        return water_co2.saturated_water_in_co2(inp.inlet_dew_point_k, p, vapour=True).water_ppmv
     if inp.inlet_water_ppmv is not None:
         ppmv = require_positive("inlet water", inp.inlet_water_ppmv)
-        if ppmv > 1e6 * p_sat / p * (1 + 1e-9):
-            raise InputError("inlet water", f"is above saturation ({1e6 * p_sat / p:.6g} ppmv at the "
+        if ppmv > y_sat * (1 + 1e-9):
+            raise InputError("inlet water", f"is above saturation ({y_sat:.6g} ppmv at the "
                              "inlet temperature and pressure)", got=ppmv)
         return ppmv
-    return 1e6 * p_sat / p
+    return y_sat
 
 
 def _target_ppmv(inp: DryerInput) -> tuple[float, str]:
@@ -182,7 +184,8 @@ def _target_ppmv(inp: DryerInput) -> tuple[float, str]:
     if inp.target_ppmv is not None:
         return require_positive("target ppmv", inp.target_ppmv), "given as ppmv"
     if inp.target_dew_point_k is not None:
-        return (water.ppmv_from_dew_point(inp.target_dew_point_k, inp.inlet_pressure_pa),
+        return (water_co2.saturated_water_in_co2(inp.target_dew_point_k, inp.inlet_pressure_pa,
+                                                 vapour=True).water_ppmv,
                 "given as a dew point")
     return ISBT_WATER_PPMV, ISBT_SOURCE
 
@@ -227,7 +230,7 @@ def size_dryer(inp: DryerInput) -> DryerResult:
     y_t = target * 1e-6
     if y_t >= y_in:
         raise InputError("target", "must be drier than the inlet gas "
-                         f"({y_in * 1e6:.6g} ppmv, dew point {water.dew_point(y_in * p) - 273.15:.1f} degC)",
+                         f"({y_in * 1e6:.6g} ppmv, dew point {water_co2.dew_point_in_co2(y_in * 1e6, p) - 273.15:.1f} degC)",
                          got=f"{target:.6g} ppmv")
     warnings: list[str] = []
     p_out, q_res = outlet_limit(d, t_in)
@@ -320,7 +323,7 @@ def size_dryer(inp: DryerInput) -> DryerResult:
         y_end = y_out + x_end * (y_in - y_out)
         if y_end > 1.5 * y_out:
             warnings.append(f"By the end of the {cycle / 3600.0:.3g} h cycle the outlet carries about "
-                            f"{y_end * 1e6:.3g} ppmv (dew point {water.dew_point(y_end * p) - 273.15:.0f} "
+                            f"{y_end * 1e6:.3g} ppmv (dew point {water_co2.dew_point_in_co2(y_end * 1e6, p) - 273.15:.0f} "
                             f"degC): {d.id}'s front is wider than the bed, so its floor of "
                             f"{y_out * 1e6:.3g} ppmv is not what this bed delivers.")
     if velocity > v_limit:
@@ -353,11 +356,12 @@ def size_dryer(inp: DryerInput) -> DryerResult:
     charge_cost = bed_mass * price / d.service_life_cycles
     co2_per_cycle = m_co2 * cycle
     cost = (charge_cost + (energy_cost or 0.0)) / co2_per_cycle
-    warnings.extend(_notes(d, y_in * p / p_sat))
+    rh_in = y_in * 1e6 / water_co2.saturated_water_in_co2(t_in, p).water_ppmv
+    warnings.extend(_notes(d, rh_in))
     return DryerResult(
         desiccant=d.id, co2_flow_kg_s=m_co2, inlet_water_ppmv=y_in * 1e6,
-        inlet_dew_point_k=water.dew_point(y_in * p), inlet_relative_humidity=y_in * p / p_sat,
-        target_ppmv=target, target_dew_point_k=water.dew_point(y_t * p), target_basis=basis,
+        inlet_dew_point_k=water_co2.dew_point_in_co2(y_in * 1e6, p), inlet_relative_humidity=rh_in,
+        target_ppmv=target, target_dew_point_k=water_co2.dew_point_in_co2(y_t * 1e6, p), target_basis=basis,
         water_in_kg_s=water_in, water_load_kg_per_cycle=load, equilibrium_loading_kg_per_kg=q_eq,
         residual_loading_kg_per_kg=q_res, working_capacity_kg_per_kg=working,
         saturated_length_m=l_sat, mtz_length_m=l_mtz, bed_length_m=length, bed_diameter_m=diameter,
@@ -365,7 +369,7 @@ def size_dryer(inp: DryerInput) -> DryerResult:
         gas_viscosity_pa_s=gas.viscosity_pa_s, superficial_velocity_m_s=velocity,
         velocity_limit_m_s=v_limit, pressure_drop_pa=drop, stoichiometric_time_s=t_s,
         breakthrough_s=t_b, breakthrough_fraction=x_b, front_rate_per_s=k, outlet_ppmv=y_out * 1e6,
-        outlet_dew_point_k=water.dew_point(y_out * p), reaches_target=reaches,
+        outlet_dew_point_k=water_co2.dew_point_in_co2(y_out * 1e6, p), reaches_target=reaches,
         suggested_desiccant=suggestion, regeneration_heat_j=heat, regeneration_energy_cost=energy_cost,
         desiccant_cost_per_cycle=charge_cost, cost_per_kg_co2=cost, warnings=tuple(warnings),
         cautions=_cautions(d, p),

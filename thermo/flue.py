@@ -20,6 +20,7 @@ with the CO2 given in place of the standard's 314 ppm and the three scaled to fi
 
 from __future__ import annotations
 
+import threading
 from dataclasses import dataclass
 from functools import lru_cache
 from typing import Mapping
@@ -149,19 +150,33 @@ def stoichiometric_oxygen(fuel: str) -> float:
     return comp.get("C", 0.0) + comp.get("H", 0.0) / 4.0 - comp.get("O", 0.0) / 2.0
 
 
-@lru_cache(maxsize=8)
+#: One Cantera mixture per fuel *per thread*: :func:`burn` changes the mixture's state, and the
+#: interface runs routes in several threads at once, so a shared object would mix their states.
+_PER_THREAD = threading.local()
+
+
 def _gas(fuel_species: str):
-    """An ideal-gas Cantera mixture of the fuel and the products (built once per fuel)."""
-    ct = cantera()
-    wanted = set(PRODUCTS) | {fuel_species}
-    sp = [s for s in ct.Species.list_from_file("nasa_gas.yaml") if s.name in wanted]
-    return ct.Solution(thermo="ideal-gas", species=sp)
+    """An ideal-gas Cantera mixture of the fuel and the products (built once per fuel and thread)."""
+    cache = getattr(_PER_THREAD, "gases", None)
+    if cache is None:
+        cache = _PER_THREAD.gases = {}
+    if fuel_species not in cache:
+        ct = cantera()
+        wanted = set(PRODUCTS) | {fuel_species}
+        sp = [s for s in _species_list() if s.name in wanted]
+        cache[fuel_species] = ct.Solution(thermo="ideal-gas", species=sp)
+    return cache[fuel_species]
+
+
+@lru_cache(maxsize=1)
+def _species_list() -> tuple:
+    """Species of ``nasa_gas.yaml`` (read once; Species objects are not changed here)."""
+    return tuple(cantera().Species.list_from_file("nasa_gas.yaml"))
 
 
 @lru_cache(maxsize=8)
 def _fuel_species(fuel_species: str):
-    ct = cantera()
-    return next(s for s in ct.Species.list_from_file("nasa_gas.yaml") if s.name == fuel_species)
+    return next(s for s in _species_list() if s.name == fuel_species)
 
 
 def _fuel(fuel: str):

@@ -96,7 +96,8 @@ def kiln_heat(sorbent: str, conversion: float, ambient_k: float, calcination_k: 
     ambient_k : float
         Temperature the bed enters at [K], 273.15-373.15 K.
     calcination_k : float
-        Kiln temperature [K], 700-1200 K (the calcite data end at 1200 K).
+        Kiln temperature [K], 700-1373.15 K (calcite above 1200 K as in
+        :mod:`co2routes.thermo.calcination`).
 
     Sources: reaction enthalpies and sensible heats from NASA polynomials (McBride et al. 2002)
     through :mod:`co2routes.thermo.species`; at 298.15 K, dH_calc = +178.3 kJ/mol against +178.32 from the
@@ -111,10 +112,12 @@ def kiln_heat(sorbent: str, conversion: float, ambient_k: float, calcination_k: 
         raise InputError("sorbent", "must be Ca(OH)2(s) or CaO(s)", got=repr(sorbent))
     if not (273.15 <= ambient_k <= 373.15):
         raise InputError("ambient temperature", "must be 0-100 degC", got=ambient_k)
-    if not (700.0 <= calcination_k <= 1200.0):
-        raise InputError("calcination temperature", "must be 700-1200 K", got=calcination_k)
-    reaction = parse_reaction(CALCINATION).delta_h(calcination_k)
-    sensible = species.enthalpy("CaCO3(s)", calcination_k) - species.enthalpy("CaCO3(s)", ambient_k)
+    from co2routes.thermo import calcination
+
+    if not (700.0 <= calcination_k <= calcination.T_MAX):
+        raise InputError("calcination temperature", "must be 700-1373.15 K (427-1100 degC)", got=calcination_k)
+    reaction = calcination.co2_pressure_over_calcite(calcination_k).delta_h_j_per_mol
+    sensible = calcination.calcite_g_h(calcination_k)[1] - species.enthalpy("CaCO3(s)", ambient_k)
     rest_per_ca = species.enthalpy("CaO(s)", calcination_k) - species.enthalpy(sorbent, ambient_k)
     steam = 0.0
     if sorbent == "Ca(OH)2(s)":

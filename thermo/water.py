@@ -32,6 +32,9 @@ WATER_TRIPLE_PA = 611.654771
 WATER_CRITICAL_K = 647.096
 #: Lowest temperature of the Murphy & Koop (2005) ice equation [K].
 ICE_MIN_K = 110.0
+#: A dew point is a frost point only this far below 273.16 K [K]: "0.01 degC" read as 273.15 + 0.01
+#: is 273.15999999999997 in floating point and is the triple point, not ice.
+_ICE_TOLERANCE_K = 1e-9
 
 
 @dataclass(frozen=True, slots=True)
@@ -307,7 +310,7 @@ def moisture_from_dew_point(dew_point_k: float, pressure_pa: float = ATMOSPHERE_
         water_g_per_kg_co2=g_per_kg_from_ppmv(ppmv),
         pressure_pa=float(pressure_pa),
         water_pressure_pa=ppmv * 1e-6 * pressure_pa,
-        over_ice=dew_point_k < WATER_TRIPLE_K,
+        over_ice=dew_point_k < WATER_TRIPLE_K - _ICE_TOLERANCE_K,
     )
 
 
@@ -335,7 +338,7 @@ def moisture_from_ppmv(water_ppmv: float, pressure_pa: float = ATMOSPHERE_PA) ->
         water_g_per_kg_co2=g_per_kg_from_ppmv(water_ppmv),
         pressure_pa=float(pressure_pa),
         water_pressure_pa=water_ppmv * 1e-6 * pressure_pa,
-        over_ice=t_d < WATER_TRIPLE_K,
+        over_ice=t_d < WATER_TRIPLE_K - _ICE_TOLERANCE_K,
     )
 
 

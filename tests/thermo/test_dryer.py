@@ -22,17 +22,21 @@ def test_default_target_is_the_isbt_limit():
     # ISBT quality guidelines: water at most 20 ppm v/v in beverage-grade CO2 (REFERENCES, R)
     assert r.target_ppmv == ISBT_WATER_PPMV == 20.0
     assert "ISBT" in r.target_basis
-    # 20 ppmv at 1 atm is a frost point of -55.3 degC (REFERENCES, C; Murphy & Koop 2005), 0.1 K
-    assert r.target_dew_point_k - 273.15 == pytest.approx(-55.3, abs=0.1)
+    # 20 ppmv at 1 atm is a frost point of -55.3 degC with ideal mixing (REFERENCES, C; Murphy &
+    # Koop 2005); CO2's enhancement at 1 atm (Spycher et al. 2003, about 1-2 %) lowers it by about
+    # 0.1 K; 0.2 K.
+    assert r.target_dew_point_k - 273.15 == pytest.approx(-55.3, abs=0.2)
 
 
 def test_water_load_from_saturated_inlet():
     r = size_dryer(BASE)
     # saturated at 25 degC, 1 atm: p_sat 3169.9 Pa (IAPWS-95) -> 31,285 ppmv; per kg CO2 that is
-    # 18.015/44.0095 y/(1-y) = 13.22 g water. 14 kg CO2 per cycle -> 0.185 kg. 0.5 %.
+    # 18.015/44.0095 y/(1-y) = 13.22 g water. 14 kg CO2 per cycle -> 0.185 kg; CO2's enhancement
+    # at 1 atm (Spycher et al. 2003, about +0.8 %) adds to it; 1.5 %.
     y = 3169.9 / 101325.0
     expected = 14.0 * 0.018015 / 0.0440095 * (y / (1 - y) - 2.58e-6)
-    assert r.water_load_kg_per_cycle == pytest.approx(expected, rel=0.005)
+    assert r.water_load_kg_per_cycle == pytest.approx(expected, rel=0.015)
+    assert r.water_load_kg_per_cycle > expected
 
 
 def test_water_balance_over_the_breakthrough_curve():
@@ -108,10 +112,12 @@ def test_3a_reaches_a_lower_dew_point_than_silica_gel():
 
 
 def test_pressure_makes_the_beverage_limit_reachable_for_silica_gel():
-    # 20 ppmv at 10 bar is 20 Pa of water, a frost point near -33 degC, within silica gel's reach
+    # 20 ppmv at 10 bar is 20 Pa of water, a frost point near -33 degC (ideal mixing; the CO2's
+    # enhancement, Spycher et al. 2003, puts it about 1.5 K lower), within silica gel's reach; 2 K.
     r = size_dryer(dataclasses.replace(BASE, desiccant="silica-gel", inlet_pressure_pa=10e5))
     assert r.reaches_target
-    assert water.dew_point(20e-6 * 10e5) == pytest.approx(r.target_dew_point_k, abs=1e-9)
+    assert water.dew_point(20e-6 * 10e5) == pytest.approx(r.target_dew_point_k, abs=2.0)
+    assert r.target_dew_point_k < water.dew_point(20e-6 * 10e5)
 
 
 def test_calcium_chloride_is_replaced_not_regenerated():

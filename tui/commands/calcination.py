@@ -12,7 +12,7 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
     """Options of ``calcination``."""
     group = parser.add_mutually_exclusive_group(required=True)
     group.add_argument("--temperature", metavar="T",
-                       help="kiln temperature, e.g. '900 degC' (427-927 degC)")
+                       help="kiln temperature, e.g. '900 degC' (427-1100 degC)")
     group.add_argument("--co2-pressure", metavar="P",
                        help="CO2 partial pressure over the charge, e.g. '1 atm' or '425 ppm * 1 atm'")
 

@@ -1,11 +1,12 @@
-"""``co2routes moisture``: water carried by CO2 gas, from its temperature (saturated) or dew point."""
+"""``co2routes moisture``: water carried by CO2 at any pressure, from its temperature (saturated) or dew point."""
 
 from __future__ import annotations
 
 import argparse
 
 NAME = "moisture"
-HELP = "water in CO2 gas: saturated at a temperature (as leaving a bubbler) or at a dew/frost point"
+HELP = ("water in CO2 (gas, liquid or supercritical): saturated at a temperature (as leaving a "
+        "bubbler) or at a dew/frost point, at any pressure up to 600 bar")
 
 
 def add_arguments(parser: argparse.ArgumentParser) -> None:
@@ -20,8 +21,8 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 
 def run(args: argparse.Namespace) -> dict:
-    """The gas's water content as the JSON answer."""
-    from co2routes.thermo import cautions, water
+    """The gas's water content as the JSON answer (Spycher et al. 2003 model, CO2 phase named)."""
+    from co2routes.thermo import cautions, water_co2
     from co2routes.thermo.units import parse, parse_positive
     from co2routes.tui.commands._options import for_option
 
@@ -29,21 +30,26 @@ def run(args: argparse.Namespace) -> dict:
     option, text = (("--temperature", args.temperature) if args.temperature is not None
                     else ("--dew-point", args.dew_point))
     t = parse(text, option, "temperature")
+    dew = args.temperature is None
     with for_option(option):
-        m = water.moisture_from_dew_point(t, p)
-    warnings = ["Ideal mixing, no enhancement factor: real gas near saturation holds a few per cent "
-                "more water, more at high pressure."]
-    if m.over_ice:
-        warnings.append("Below 0 degC the dew point is a frost point: the water deposits as ice.")
+        w = water_co2.saturated_water_in_co2(t, p, vapour=dew)
+    warnings = water_co2.warnings_for(w)
+    condensing = water_co2.co2_condenses_first(t, p) if dew else None
+    if condensing is not None:
+        warnings.insert(0, f"At {p / 1e5:.4g} bar the CO2 itself condenses below {condensing - 273.15:.1f} "
+                        "degC, above this dew point: the dew point is reckoned on CO2 vapour, and "
+                        "cooling the gas this far would liquefy it first.")
     answer_cautions = [cautions.ASPHYXIATION]
     if p > 1.5 * 101325.0:
         answer_cautions.insert(0, cautions.PRESSURE)
     return {
-        "water_g_per_kg_co2": m.water_g_per_kg_co2,
-        "water_ppmv": m.water_ppmv,
-        "dew_point_k": m.dew_point_k,
-        "frost_point": m.over_ice,
-        "pressure_pa": m.pressure_pa,
+        "water_g_per_kg_co2": w.water_g_per_kg_co2,
+        "water_ppmv": w.water_ppmv,
+        "dew_point_k": t,
+        "frost_point": w.over_ice,
+        "pressure_pa": w.pressure_pa,
+        "co2_phase": w.co2_phase,
+        "enhancement_factor": w.enhancement,
         "warnings": warnings,
         "cautions": answer_cautions,
     }
