@@ -188,7 +188,7 @@ def record(use: UseDemand) -> dict[str, Any]:
     """The JSON answer of a use (``co2routes demand KIND --json``): SI keys with unit suffixes."""
     out: dict[str, Any] = {
         "use": use.kind,
-        "demand_kg": use.demand_kg,
+        "demand_per_run_kg": use.demand_kg,
         "period_h": use.period_s / 3600.0,
         "demand_kg_per_day": use.demand_kg_per_day,
         "peak_kg_per_h": use.peak_kg_per_h,

@@ -11,8 +11,9 @@ stated default a user can change):
   volume of CO2 at the regulator's pressure;
 - venting and foaming: a share of the dissolved CO2 (in-line 10 %, keg 5 %, common practice).
 
-Bottle conditioning makes the dissolved CO2 in the bottle from priming sugar: it needs no gas for
-the drink itself, only for purging; the sugar is given.
+Bottle conditioning makes the dissolved CO2 and the headspace's CO2 in the bottle from priming
+sugar: it needs no gas for them, only for purging; the sugar is given, and the pressure shown is
+the bottle's at the serving temperature.
 """
 
 from __future__ import annotations
@@ -105,15 +106,16 @@ def compute(v: dict[str, Any], name: Callable[[str], str]) -> UseDemand:
     rho_reg = ideal_co2_density(t, atm + gauge)
     purge_kg = v["purge_volumes"] * package * count * rho_atm
     headspace_kg = v["headspace"] * package * count * rho_reg
+    bottled = method == "bottle-conditioning"
     dispense_kg = volume * rho_reg if method == "keg" else 0.0
     loss_share = LOSS[method] if v["loss"] is None else v["loss"]
     lost_kg = loss_share * added if method != "bottle-conditioning" else 0.0
     gas_for_drink = added if method != "bottle-conditioning" else 0.0
-    total = gas_for_drink + purge_kg + headspace_kg + dispense_kg + lost_kg
+    total = gas_for_drink + purge_kg + (0.0 if bottled else headspace_kg) + dispense_kg + lost_kg
     if held.gauge_pressure_pa < 0.0:
         warnings.append("At this temperature the drink holds the target below the air's pressure: no "
                         "regulator pressure is needed, and it loses CO2 in an open glass.")
-    priming = cb.priming_sugar_kg(added) if method == "bottle-conditioning" and added > 0 else None
+    priming = cb.priming_sugar_kg(added + headspace_kg) if bottled and added > 0 else None
     if total <= 0.0:
         raise InputError(name("method"), "gives no CO2 demand for these inputs (nothing to add, purge or fill)")
     balance = (
@@ -121,12 +123,13 @@ def compute(v: dict[str, Any], name: Callable[[str], str]) -> UseDemand:
         ("packages", count), ("package_size_m3", package),
         ("regulator_gauge_pressure_pa", gauge), ("regulator_absolute_pressure_pa", atm + gauge),
         ("co2_dissolved_kg", added), ("co2_for_drink_kg", gas_for_drink), ("purge_kg", purge_kg),
-        ("headspace_kg", headspace_kg), ("dispense_kg", dispense_kg), ("venting_and_foaming_kg", lost_kg),
+        ("headspace_kg", headspace_kg), ("headspace_from_gas_supply", not bottled), ("dispense_kg", dispense_kg), ("venting_and_foaming_kg", lost_kg),
         ("priming_sucrose_kg", priming), ("every_h", v["every"] / 3600.0),
     )
     days = v["every"] / 86400.0
+    setting = "bottle pressure" if bottled else "regulator"
     summary = (f"{total:.3g} kg per {volume * 1000:.4g} L batch ({method}) every {days:g} days, "
-               f"regulator {gauge / 1e5:.2f} bar gauge at {t - 273.15:.1f} degC")
+               f"{setting} {gauge / 1e5:.2f} bar gauge at {t - 273.15:.1f} degC")
     caution_list = [cautions.PRESSURE, cautions.ASPHYXIATION]
     return UseDemand(KIND, total, v["every"], total / days, None, summary, balance, dict(v), SOURCES,
                      tuple(warnings), tuple(caution_list))

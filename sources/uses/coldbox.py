@@ -88,8 +88,8 @@ def compute(v: dict[str, Any], name: Callable[[str], str]) -> UseDemand:
     try:
         r = dry_ice_needed(hold, area_m2=v["box_area"], u_w_m2_k=u, outside_k=v["outside_temperature"], load_j=load)
     except InputError as err:
-        raise InputError(name("outside_temperature"), err.allowed.replace("must be warmer", "must be warmer (a box "
-                         "cannot be hotter inside than out)"), err.got) from None
+        raise InputError(name("outside_temperature"), "must be warmer than the dry ice inside, -78.5 degC: a "
+                         "box hotter inside than out needs no ice", err.got) from None
     every = v["every"] or (hold if hold > 0.0 else 86400.0)
     if every < hold:
         raise InputError(name("every"), "must not be shorter than the hold time", got=f"{every / 3600:g} h")
