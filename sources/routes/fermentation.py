@@ -100,7 +100,7 @@ class Batch:
 def plan(request: RouteRequest) -> Batch:
     """Size a fermentation that delivers ``request.co2_kg`` of CO2 gas."""
     from co2routes.thermo import henry, species, water
-    from co2routes.thermo.purge import purge_loss
+    from co2routes.thermo.purge import CO2_MOLAR_MASS, purge_loss
     from co2routes.thermo.reaction import parse_reaction
 
     opt = settings(OPTIONS, request.options)
@@ -129,7 +129,7 @@ def plan(request: RouteRequest) -> Batch:
     y_w = water.saturated_ppmv(t, p) / 1e6
     c = henry.dissolved_co2_kg_m3(t, p * (1.0 - y_w))
     dissolved = c * water_end_mol * m["H2O(l)"] / 1000.0 / m["CO2(g)"]
-    purged = purge_loss(must_m3 * opt["headspace"], opt["collect_purity"], t, p).lost_kg / m["CO2(g)"]
+    purged = purge_loss(must_m3 * opt["headspace"], opt["collect_purity"], t, p).lost_kg / CO2_MOLAR_MASS
     if dissolved + purged >= co2_made:
         raise InputError("option sugar_concentration", "so little sugar leaves all its CO2 dissolved "
                          "or in the headspace", got=conc)
