@@ -21,6 +21,8 @@ Schema (every quantity a string with units)::
     [options.ROUTE-ID]  KEY = "VALUE" for that route's options
     [prices]    KEY = "AMOUNT / UNIT" overriding the price book
     [uncertain] "INPUT" = {dist = ..., ...}: spreads for what-if analysis (co2routes.sources.whatif)
+    [use]       kind = greenhouse | fermentation | carbonation | cold-box and its inputs: sets the
+                demand instead of ``demand`` (co2routes.sources.uses)
 """
 
 from __future__ import annotations
@@ -36,6 +38,7 @@ from typing import Any, Mapping
 
 from co2routes.sources.base import Site
 from co2routes.sources.prices import PriceBook, load_book
+from co2routes.sources.uses import from_document as use_demand
 from co2routes.thermo.errors import InputError
 from co2routes.thermo.units import parse, parse_positive
 
@@ -45,7 +48,7 @@ DEFAULT_WEIGHTS = {"cost": 3.0, "energy": 1.0, "time": 1.0, "heat": 0.5, "water"
                    "purity": 1.0, "hazard": 2.0}
 DEMOS = {"polytunnel": "demo-polytunnel.toml", "science-fair": "demo-science-fair.toml"}
 _TOP_KEYS = {"name", "note", "demand", "batch", "end_product", "currency", "site", "dryer",
-             "delivery", "weights", "options", "prices", "uncertain"}
+             "delivery", "weights", "options", "prices", "uncertain", "use"}
 _SECTION_KEYS = {
     "site": {"temperature", "pressure", "air_co2"},
     "dryer": {"desiccant", "target_dew_point", "target_ppmv", "cycle"},
@@ -99,6 +102,8 @@ class Scenario:
     options: Mapping[str, Mapping[str, str]]
     prices: PriceBook
     document: Mapping[str, Any] = field(repr=False, default_factory=dict)
+    #: the :class:`co2routes.sources.uses.UseDemand` the demand was worked out from (``None``: given)
+    use: Any = None
 
 
 def _line_of(text: str | None, section: str | None, key: str) -> int | None:
@@ -155,7 +160,8 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
         fn = parse_positive if positive else parse
         return fn(raw, where(section, key), dimension)
 
-    demand_text = document.get("demand")
+    use = use_demand(document, where)
+    demand_text = document.get("demand") if use is None else use.demand_text
     if demand_text is None:
         raise InputError(where(None, "demand"), "is required, e.g. demand = \"1.5 kg/day\" or \"3 kg\"")
     batch_s = None
@@ -240,7 +246,7 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
         name=str(document.get("name", "unnamed scenario")), note=str(document.get("note", "")),
         co2_kg=co2_kg, batch_s=batch_s, end_product=end_product, site=site, dryer=dryer,
         delivery=delivery, weights=weights, options=options, prices=prices,
-        document=copy.deepcopy(dict(document)),
+        document=copy.deepcopy(dict(document)), use=use,
     )
 
 

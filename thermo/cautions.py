@@ -72,3 +72,12 @@ DELIQUESCENT_SALT = (
     "goggles and gloves, use a plastic or stainless vessel with a drain, and dispose of spent brine "
     "as local rules require."
 )
+GREENHOUSE_ENTRY = (
+    "People work in an enriched house: keep CO2 below 5,000 ppm averaged over 8 h (OSHA PEL, "
+    "29 CFR 1910.1000 Table Z-1; ACGIH TLV-TWA) and 30,000 ppm over 15 min (ACGIH STEL); stop the "
+    "supply and ventilate before anyone enters, and fit a CO2 alarm at working height."
+)
+DRY_ICE_TRANSPORT = (
+    "Subliming dry ice fills a closed car, cold room or lift with CO2: carry it ventilated, never in "
+    "a closed passenger space, and open a cold room's door and air it before going in."
+)

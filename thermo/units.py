@@ -38,6 +38,10 @@ DIMENSIONS: dict[str, tuple[str, str]] = {
     "velocity": ("meter / second", "[length] / [time]"),
     "fraction": ("dimensionless", "dimensionless"),
     "heat_transfer_coefficient": ("watt / meter ** 2 / kelvin", "[mass] / [temperature] / [time] ** 3"),
+    "frequency": ("1 / second", "1 / [time]"),
+    "mass_flux": ("kilogram / meter ** 2 / second", "[mass] / [length] ** 2 / [time]"),
+    "specific_heat": ("joule / kilogram / kelvin", "[length] ** 2 / [temperature] / [time] ** 2"),
+    "conductivity": ("watt / meter / kelvin", "[length] * [mass] / [temperature] / [time] ** 3"),
 }
 
 #: A few examples per dimension, used in error messages.
@@ -58,6 +62,10 @@ EXAMPLES: dict[str, str] = {
     "velocity": "'0.2 m/s'",
     "fraction": "'31 %', '0.31'",
     "heat_transfer_coefficient": "'0.5 W/m**2/K'",
+    "frequency": "'0.5 /h', '2 /day'",
+    "mass_flux": "'2 g/m**2/h'",
+    "specific_heat": "'4.18 kJ/kg/K'",
+    "conductivity": "'0.035 W/m/K'",
 }
 
 

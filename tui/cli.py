@@ -18,6 +18,7 @@ from co2routes.thermo.errors import InputError
 #: The verbs, in the order ``--help`` lists them; each is ``co2routes.tui.commands.<module>``.
 COMMANDS: tuple[str, ...] = (
     "compare",
+    "demand",
     "sensitivity",
     "uncertainty",
     "batch",

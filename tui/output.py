@@ -27,6 +27,8 @@ _SUFFIXES: dict[str, tuple[str, float, float]] = {
     "_kwh_per_kg": ("kWh/kg", 1.0, 0.0),
     "_kg_per_cycle": ("kg/cycle", 1.0, 0.0),
     "_kg_per_day": ("kg/day", 1.0, 0.0),
+    "_kg_per_h": ("kg/h", 1.0, 0.0),
+    "_per_h": ("per h", 1.0, 0.0),
     "_w_m2_k": ("W/(m²·K)", 1.0, 0.0),
     "_m2": ("m²", 1.0, 0.0),
     "_w": ("W", 1.0, 0.0),

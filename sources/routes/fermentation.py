@@ -11,6 +11,16 @@ mol of sugar fermented", Colombie et al. 2007, Biotechnol. Bioeng.), with the CO
 Henry's law at the fermenter temperature (:mod:`co2routes.thermo.henry`) and the water the gas carries away
 saturated at that temperature (:mod:`co2routes.thermo.water`).
 
+Headspace purge (well-mixed exponential washout, Danckwerts 1953, Chem. Eng. Sci. 2, 1;
+:mod:`co2routes.thermo.purge`): the fermenter's headspace (option ``headspace``, a share of the must
+volume) starts as air; the gas is collected only once the outlet reaches ``collect_purity``, which
+takes V_h ln(1 / (1 - y*)) of CO2, and the headspace keeps the rest (1 - y*) V_h after the switch.
+That CO2 is made but not recovered, beside the CO2 left dissolved.
+
+By-product (option ``byproduct = yes``): the brew is made anyway, so its sugar, yeast, water and
+vessels are paid for by the beer and cost the CO2 nothing; collection, drying and delivery are
+still charged by the comparison.
+
 Time to finish (common practice, not a published kinetic law): a 200 g/L must at 20 degC with an
 ordinary wine or ale yeast ferments out in about 7 days; the time scales with the sugar
 concentration and halves for every 10 K warmer (Q10 = 2), used from 15 to 32 degC.
@@ -22,6 +32,7 @@ from dataclasses import dataclass
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
 from co2routes.sources.routes._options import NamedDefaultOption, settings
+from co2routes.sources.routes.shared import YES_NO
 from co2routes.thermo import cautions
 from co2routes.thermo.errors import InputError
 
@@ -58,6 +69,14 @@ OPTIONS = (
                        help="'site' = the site's temperature; 5-40 degC, best 15-32 degC"),
     Option("yeast", "yeast dose", "density", "0.5 g/L", low=0.05, high=10.0,
            help="dry yeast per litre of must (common practice 0.2-1 g/L)"),
+    Option("headspace", "fermenter headspace", "fraction", "25 %", low=0.0, high=2.0,
+           help="headspace as a share of the must volume; fermenters are filled to about 75-80 % "
+                "(common practice)"),
+    Option("collect_purity", "collect from purity", "fraction", "99 %", low=0.5, high=0.9999,
+           help="CO2 fraction at which collection starts; the headspace gas before it is vented"),
+    Option("byproduct", "CO2 as a by-product of a brew", "choice", "no", choices=YES_NO,
+           help="yes: the brew is made anyway, so sugar, yeast, water and vessels cost the CO2 "
+                "nothing; collection, drying and delivery are still charged"),
 )
 
 
@@ -73,11 +92,14 @@ class Batch:
     temperature_k: float
     days: float
     warnings: tuple[str, ...]
+    #: CO2 made but lost to the headspace purge and fill [mol] (:mod:`co2routes.thermo.purge`)
+    purged_mol: float = 0.0
 
 
 def plan(request: RouteRequest) -> Batch:
     """Size a fermentation that delivers ``request.co2_kg`` of CO2 gas."""
     from co2routes.thermo import henry, species, water
+    from co2routes.thermo.purge import CO2_MOLAR_MASS, purge_loss
     from co2routes.thermo.reaction import parse_reaction
 
     opt = settings(OPTIONS, request.options)
@@ -106,9 +128,11 @@ def plan(request: RouteRequest) -> Batch:
     y_w = water.saturated_ppmv(t, p) / 1e6
     c = henry.dissolved_co2_kg_m3(t, p * (1.0 - y_w))
     dissolved = c * water_end_mol * m["H2O(l)"] / 1000.0 / m["CO2(g)"]
-    if dissolved >= co2_made:
-        raise InputError("option sugar_concentration", "so little sugar leaves all its CO2 dissolved", got=conc)
-    delivered = co2_made - dissolved
+    purged = purge_loss(must_m3 * opt["headspace"], opt["collect_purity"], t, p).lost_kg / CO2_MOLAR_MASS
+    if dissolved + purged >= co2_made:
+        raise InputError("option sugar_concentration", "so little sugar leaves all its CO2 dissolved "
+                         "or in the headspace", got=conc)
+    delivered = co2_made - dissolved - purged
     vapour = delivered * y_w / (1.0 - y_w)
     heat = (h_prep + eff * ferment.delta_h(t)
             + dissolved * (species.enthalpy("CO2(aq)", t) - species.enthalpy("CO2(g)", t))
@@ -120,7 +144,7 @@ def plan(request: RouteRequest) -> Batch:
                "H2O(l)": (water_end_mol - vapour) * scale}
     days = DAYS_REF * (conc / C_REF_KG_M3) * Q10 ** ((T_REF_K - t) / 10.0)
     return Batch(inputs, outputs, heat * scale / 1000.0, must_m3 * scale, water_kg * scale, t, days,
-                 tuple(warnings))
+                 tuple(warnings), purged * scale)
 
 
 def compute(request: RouteRequest) -> RouteResult:
@@ -134,7 +158,7 @@ def compute(request: RouteRequest) -> RouteResult:
     sugar_kg = batch.inputs[sugar_sp] * mm[sugar_sp]
     must_l = batch.must_m3 * 1000.0
     yeast_kg = opt["yeast"] * batch.must_m3
-    generated = (batch.outputs["CO2(g)"] + batch.outputs["CO2(aq)"]) * mm["CO2(g)"]
+    generated = (batch.outputs["CO2(g)"] + batch.outputs["CO2(aq)"] + batch.purged_mol) * mm["CO2(g)"]
     ethanol_kg = batch.outputs["C2H5OH(aq)"] * mm["C2H5OH(aq)"]
     wash_kg = sum(batch.outputs[n] * mm[n] for n in ("C2H5OH(aq)", "C6H12O6(aq)", "CO2(aq)", "H2O(l)"))
     y_c, y_w = batch.outputs["CO2(g)"], batch.outputs["H2O(g)"]
@@ -155,6 +179,7 @@ def compute(request: RouteRequest) -> RouteResult:
     ]
     if sugar_note:
         notes.append(sugar_note)
+    notes.append(_recovery_note(batch, opt, mm["CO2(g)"], generated))
     abv = ethanol_kg / 789.0 / batch.must_m3
     byproducts = (
         Byproduct("ethanol", "C2H5OH", ethanol_kg, f"in the wash, about {abv:.0%} by volume"),
@@ -165,6 +190,11 @@ def compute(request: RouteRequest) -> RouteResult:
     reagents = (Reagent(label, sugar_sp.split("(")[0], sugar_kg, sugar_kg, None, price_key),
                 Reagent("dry yeast", "yeast", yeast_kg, yeast_kg, None, "yeast"))
     uses = (Use("water for the must", batch.water_kg / 1000.0, "volume_m3", "water"),)
+    if opt["byproduct"] == "yes":
+        notes.append(f"By-product: the brew's {sugar_kg:.3g} kg {label}, {yeast_kg * 1000:.3g} g yeast, "
+                     f"{batch.water_kg:.4g} kg water and its vessels are paid for by the drink, not "
+                     "charged to the CO2; collection, drying and delivery are.")
+        reagents, uses = (), ()
     return RouteResult(
         co2_kg=request.co2_kg, co2_generated_kg=generated,
         reagents=reagents, byproducts=byproducts, uses=uses,
@@ -173,6 +203,17 @@ def compute(request: RouteRequest) -> RouteResult:
         energy=Energy(), time_h=hours, hazard=1,
         hazard_reason="food-grade sugar and yeast; the CO2 and ethanol vapour must be vented",
         warnings=tuple(warnings), cautions=(cautions.FERMENTER, cautions.ASPHYXIATION), notes=tuple(notes))
+
+
+def _recovery_note(batch: Batch, opt: dict, molar_mass: float, generated_kg: float) -> str:
+    """Where the CO2 made goes: recovered, left dissolved, lost to the headspace purge."""
+    lost = batch.purged_mol * molar_mass
+    dissolved = batch.outputs["CO2(aq)"] * molar_mass
+    return (f"Of {generated_kg:.4g} kg CO2 made, {dissolved:.3g} kg stays dissolved and {lost:.3g} kg "
+            f"({lost / generated_kg:.1%}) goes to the headspace: vented until the gas reaches "
+            f"{opt['collect_purity']:.1%} CO2 and left in a {opt['headspace']:.0%} headspace "
+            f"(well-mixed washout, Danckwerts 1953); {batch.outputs['CO2(g)'] * molar_mass / generated_kg:.1%} "
+            "is recovered.")
 
 
 @dataclass(frozen=True)

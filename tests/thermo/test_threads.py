@@ -8,7 +8,7 @@ from __future__ import annotations
 
 from concurrent.futures import ThreadPoolExecutor
 
-from co2routes.sources.compare import compare
+from co2routes.sources.pipeline import compare
 from co2routes.sources.scenario import demo
 from co2routes.thermo import flue
 
