@@ -15,7 +15,8 @@ import dataclasses
 from dataclasses import dataclass
 from typing import Any, Callable, Mapping, Sequence
 
-from co2routes.sources.base import Route, RouteRequest, RouteResult, Use, parse_options
+from co2routes.sources.base import Route, RouteRequest, RouteResult, Use
+from co2routes.sources.guard import failure_line, option_table_field, route_options, run_route
 from co2routes.sources.prices import cost_lines
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import CRITERIA, Scenario
@@ -72,12 +73,12 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
 
     given = dict(scenario.options.get(route.id, {}))
     given.update(options or {})
-    parsed = parse_options(route, given)
+    parsed = route_options(route, given, scenario)
     product_kg = scenario.co2_kg if co2_kg is None else co2_kg
 
     def run(kg: float) -> RouteResult:
-        return route.compute(RouteRequest(co2_kg=kg, site=scenario.site, options=parsed,
-                                          end_product=scenario.end_product))
+        return run_route(route, RouteRequest(co2_kg=kg, site=scenario.site, options=parsed,
+                                             end_product=scenario.end_product))
 
     result = run(product_kg)
     raw_kg, flash = raw_co2_needed(product_kg, scenario.end_product, result.delivers,
@@ -155,7 +156,7 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
 
             if isinstance(err, InputError):
                 raise
-            failures.append(f"route {route.id!r} failed: {type(err).__name__}: {err}")
+            failures.append(failure_line(route, err))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
                       dict(scenario.weights), rank(results, scenario.weights), tuple(failures))
 
@@ -170,7 +171,7 @@ def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:
     known = {r.id for r in routes}
     for route_id in scenario.options:
         if route_id not in known:
-            raise InputError(f"scenario [options.{route_id}]",
+            raise InputError(option_table_field(scenario, route_id),
                              f"names no route found; routes are {', '.join(sorted(known))}")
 
 
