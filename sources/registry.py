@@ -43,7 +43,8 @@ def catalogue() -> Catalogue:
     """Load every route registered under :data:`GROUP` (cached for the process)."""
     routes: list[Route] = []
     failures: list[str] = []
-    for ep in sorted(entry_points(group=GROUP), key=lambda e: e.name):
+    # the built-in routes load first, so a plug-in that reuses one of their ids is the one left out
+    for ep in sorted(entry_points(group=GROUP), key=lambda e: (not e.value.startswith("co2routes."), e.name)):
         try:
             route = checked_route(ep.load())
         except KeyboardInterrupt:
