@@ -13,7 +13,8 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Mapping, Sequence
 
-from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use, parse_options
+from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use
+from co2routes.sources.guard import failure_line, option_table_field, route_options, run_route
 from co2routes.sources.plan import NotApplicable, PlannedRoute
 from co2routes.sources.prices import cost_lines
 from co2routes.sources.rank import RouteRow, rank
@@ -56,17 +57,15 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
 
     given = dict(scenario.options.get(route.id, {}))
     given.update(options or {})
-    parsed = parse_options(route, given)
+    parsed = route_options(route, given, scenario)
     product_kg = scenario.co2_kg if co2_kg is None else co2_kg
 
     def run(kg: float) -> RouteResult:
         try:
-            return route.compute(RouteRequest(co2_kg=kg, site=scenario.site, options=parsed,
-                                              end_product=scenario.end_product))
-        except RouteRefused:
-            raise
-        except InputError as err:
-            raise RouteRefused(f"route {route.id}", str(err)) from None
+            return run_route(route, RouteRequest(co2_kg=kg, site=scenario.site, options=parsed,
+                                                 end_product=scenario.end_product))
+        except InputError as err:  # the route's own refusal, its field already names the route
+            raise RouteRefused(err.field, err.allowed, err.got) from None
 
     made = run(product_kg)
     raw_kg, flash = raw_co2_needed(product_kg, scenario.end_product, made.delivers,
@@ -112,11 +111,11 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
         try:
             results.append(evaluate(route, scenario))
         except RouteRefused as err:
-            refused.append(NotApplicable(route.id, route.label, err.allowed))
+            refused.append(NotApplicable(route.id, route.label, str(err).removeprefix(f"route {route.id}: ")))
         except InputError:
             raise
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
-            failures.append(f"route {route.id!r} failed: {type(err).__name__}: {err}")
+            failures.append(failure_line(route, err))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
                       dict(scenario.weights), rank(results, scenario.weights), tuple(failures),
                       tuple(refused))
@@ -130,5 +129,5 @@ def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:
     known = {r.id for r in routes}
     for route_id in scenario.options:
         if route_id not in known:
-            raise InputError(f"scenario [options.{route_id}]",
+            raise InputError(option_table_field(scenario, route_id),
                              f"names no route found; routes are {', '.join(sorted(known))}")

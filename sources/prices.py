@@ -7,15 +7,15 @@ A missing price makes that cost unknown (``None``), never zero.
 
 from __future__ import annotations
 
-import tomllib
 from dataclasses import dataclass
 from importlib import resources
 from pathlib import Path
 from typing import Any, Iterable, Mapping
 
+from co2routes.sources import limits
 from co2routes.sources.base import CostLine, Reagent, Use
 from co2routes.thermo.errors import InputError
-from co2routes.thermo.units import parse, registry
+from co2routes.thermo.units import check_text, parse, registry
 
 #: dimensions a price may be per, with the SI unit it is normalised to.
 _PER = {"mass": "kilogram", "volume": "meter ** 3", "energy": "joule"}
@@ -47,10 +47,12 @@ class PriceBook:
 
     def overridden(self, entries: Mapping[str, Any], where: str) -> "PriceBook":
         """A new book with ``entries`` (raw TOML values) replacing or adding prices."""
-        merged = dict(self.prices)
-        for key, raw in entries.items():
-            merged[key] = parse_price(key, raw, where)
-        return PriceBook(self.currency, merged)
+        limits.check_size(entries, where)
+        return self.with_prices({key: parse_price(key, raw, where) for key, raw in entries.items()})
+
+    def with_prices(self, prices: Mapping[str, Price]) -> "PriceBook":
+        """A new book with ``prices`` (parsed) replacing or adding entries."""
+        return PriceBook(self.currency, {**self.prices, **prices})
 
 
 def parse_price(key: str, raw: Any, where: str = "prices") -> Price:
@@ -81,11 +83,14 @@ def parse_price(key: str, raw: Any, where: str = "prices") -> Price:
     if not isinstance(text, str) or "/" not in text:
         raise InputError(field, allowed, got=repr(text))
     amount_text, unit_text = text.split("/", 1)
+    check_text(text.replace("/", " ", 1), field, "'AMOUNT / UNIT'")
     try:
         amount = float(amount_text.strip())
     except ValueError:
         raise InputError(field, allowed, got=repr(text)) from None
-    if amount < 0 or amount != amount:
+    if amount != amount or amount in (float("inf"), float("-inf")):
+        raise InputError(field, "a price must be a finite number", got=repr(text))
+    if amount < 0:
         raise InputError(field, "a price cannot be negative", got=repr(text))
     ureg = registry()
     try:
@@ -95,6 +100,8 @@ def parse_price(key: str, raw: Any, where: str = "prices") -> Price:
     for per, si in _PER.items():
         if unit.check(ureg.Quantity(1.0, si).dimensionality):
             size = float(unit.to(si).magnitude)
+            limits.check_between(amount / size if size > 0 else float("inf"), field, 0.0, limits.MAX_PRICE,
+                                 f"a price of at most {limits.MAX_PRICE:g} per kg, m3 or J", repr(text))
             return Price(key, amount / size, per, strength, str(text))
     raise InputError(field, allowed, got=repr(text))
 
@@ -112,7 +119,7 @@ def _book_from_toml(data: Mapping[str, Any], where: str) -> PriceBook:
 def demo_book() -> PriceBook:
     """The shipped book of invented demo prices."""
     text = resources.files("co2routes.sources").joinpath("data/prices.toml").read_text(encoding="utf-8")
-    return _book_from_toml(tomllib.loads(text), "demo price book")
+    return _book_from_toml(limits.loads(text, "demo price book"), "demo price book")
 
 
 def user_book_path() -> Path:
@@ -131,13 +138,9 @@ def load_book(path: Path | None = None) -> PriceBook:
     path = user_book_path() if path is None else path
     if not path.exists():
         return demo_book()
-    try:
-        data = tomllib.loads(path.read_text(encoding="utf-8"))
-    except tomllib.TOMLDecodeError as err:
-        raise InputError(str(path), f"is not valid TOML: {err}") from None
-    except OSError as err:
-        raise InputError(str(path), f"cannot be read: {err.strerror}") from None
-    return _book_from_toml(data, str(path))
+    where = f"price book {path}"
+    data = limits.loads(limits.read_text(path, "price book"), where)
+    return _book_from_toml(data, where)
 
 
 def reagent_cost(reagent: Reagent, book: PriceBook) -> CostLine:

@@ -34,6 +34,7 @@ import numpy as np
 from co2routes.sources.base import Route
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
+from co2routes.sources.guard import RouteFault, failure_line
 from co2routes.sources.whatif import SCENARIO_INPUTS, Distribution, cost_model, evaluate_at, price_keys, targets
 from co2routes.sources.pipeline import RouteRefused
 from co2routes.thermo.errors import InputError
@@ -82,7 +83,11 @@ def default_distributions(scenario: Scenario, routes: Sequence[Route]) -> dict[s
 
     out: dict[str, Distribution] = {}
     for route in routes:
-        for key in price_keys(evaluate(route, scenario)):
+        try:
+            result = evaluate(route, scenario)
+        except RouteFault:
+            continue  # reported with the route's name when the route itself is run
+        for key in price_keys(result):
             price = scenario.prices.get(key) if key else None
             if price is not None and f"prices.{key}" not in out:
                 out[f"prices.{key}"] = Distribution(f"prices.{key}", "uniform", low=0.75 * price.amount,
@@ -164,11 +169,11 @@ def uncertainty(scenario: Scenario, distributions: Mapping[str, Distribution] | 
                     step()
                 curves.append((name, nodes, table))
         except RouteRefused as err:
-            failures.append(f"route {route.id!r} not applicable: {err.allowed}")
+            failures.append(f"route {route.id!r} not applicable: {str(err).removeprefix(f'route {route.id}: ')}")
         except InputError:
             raise
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
-            failures.append(f"route {route.id!r} failed: {type(err).__name__}: {err}")
+            failures.append(failure_line(route, err))
             continue
         plans.append((route, base, model, curves))
     seconds_evaluating = time.perf_counter() - start

@@ -15,6 +15,7 @@ was wrong and what dimension was expected.
 from __future__ import annotations
 
 import math
+import re
 from functools import lru_cache
 
 from co2routes.thermo.errors import InputError
@@ -69,6 +70,66 @@ EXAMPLES: dict[str, str] = {
 }
 
 
+#: Caps on what a quantity's text may hold (see README, "Bad input"): characters, digits of the
+#: number and digits of its decimal exponent. Longer texts are refused before pint sees them.
+MAX_TEXT = 80
+MAX_DIGITS = 20
+MAX_EXPONENT_DIGITS = 3
+
+#: The largest magnitude, in the SI unit of :data:`DIMENSIONS`, any field of that dimension may
+#: hold; far beyond anything a small CO2 supply meets, so a value above it is a typing mistake.
+LARGEST: dict[str, float] = {
+    "temperature": 1e4, "temperature_difference": 1e4, "pressure": 1e9, "volume": 1e6,
+    "mass": 1e9, "length": 1e5, "area": 1e6, "time": 1e10, "energy": 1e15, "power": 1e10,
+    "mass_flow": 1e4, "volume_flow": 1e4, "density": 1e5, "velocity": 1e4, "fraction": 1e3,
+    "heat_transfer_coefficient": 1e6,
+}
+
+_TOKEN = re.compile(r"\s*(?:(?P<num>(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?)"
+                    r"|(?P<name>[^\W\d]\w*|%)|(?P<power>\*\*|\^)|(?P<op>[*/()])|(?P<sign>[-+]))")
+
+
+def check_text(raw: str, field: str, want: str) -> None:
+    """Refuse a quantity text that is not one number followed by a unit expression.
+
+    The unit expression may use names, ``*``, ``/``, parentheses and one-digit powers
+    (``m**3``, ``W/m**2/K``); a number anywhere else (``"2 degC * 3"``, ``"10**400 kg"``,
+    ``"9**9**9 K"``) is arithmetic and is refused, as are texts over :data:`MAX_TEXT` characters
+    and numbers over :data:`MAX_DIGITS` digits or an exponent over :data:`MAX_EXPONENT_DIGITS`.
+
+    >>> check_text("2 degC * 3", "t", "a temperature")
+    Traceback (most recent call last):
+    ...
+    co2routes.thermo.errors.InputError: t: must be a temperature: one number and its unit, no arithmetic (got '2 degC * 3')
+    """
+    if len(raw) > MAX_TEXT:
+        raise InputError(field, f"must be {want}, at most {MAX_TEXT} characters", got=f"{len(raw)} characters")
+    arithmetic = InputError(field, f"must be {want}: one number and its unit, no arithmetic", got=repr(raw))
+    position, numbers, previous, before = 0, 0, "", ""
+    while position < len(raw):
+        match = _TOKEN.match(raw, position)
+        if match is None:
+            return  # a character outside the grammar: pint refuses it with the usual message
+        text = match.group(match.lastgroup)
+        kind = "close" if text == ")" else match.lastgroup
+        position = match.end()
+        if kind == "num":
+            mantissa, _, exponent = text.lower().partition("e")
+            if sum(c.isdigit() for c in mantissa) > MAX_DIGITS or len(exponent.lstrip("+-")) > MAX_EXPONENT_DIGITS:
+                raise InputError(field, f"must be {want}, a number of at most {MAX_DIGITS} digits and "
+                                 f"an exponent of at most {MAX_EXPONENT_DIGITS}", got=repr(raw))
+            if previous == "power" or (previous == "sign" and before == "power"):
+                if not text.isdigit() or len(text) > 1:
+                    raise arithmetic  # a power is one digit: m**3, not m**400
+            elif numbers or previous not in ("", "sign"):
+                raise arithmetic  # a second number, or one after a unit: "2 degC * 3"
+            else:
+                numbers += 1
+        elif kind == "power" and previous not in ("name", "close"):
+            raise arithmetic  # a power of a number: "10**400", "9**9**9"
+        before, previous = previous, kind
+
+
 @lru_cache(maxsize=1)
 def registry():
     """The project's single pint registry (built on first use; pint is not on the start-up path)."""
@@ -94,6 +155,8 @@ def parse(text: str | float | int, field: str, dimension: str) -> float:
     >>> parse("1 atm", "pressure", "pressure")
     101325.0
     """
+    if isinstance(text, str) and len(text) > MAX_TEXT:  # refused before it is cached
+        raise InputError(field, f"must be at most {MAX_TEXT} characters", got=f"{len(text)} characters")
     if isinstance(text, (str, int, float)) and not isinstance(text, bool):
         return _parse_cached(text, field, dimension)
     return _parse(text, field, dimension)
@@ -142,9 +205,11 @@ def _parse(text: str | float | int, field: str, dimension: str) -> float:
         raw = str(text).strip()
         if not raw:
             raise InputError(field, f"must be {want}", got="nothing")
+        raw = raw.replace("°C", " degC").replace("°F", " degF").replace("°", " deg")
+        check_text(raw, field, want)
         ureg = registry()
         try:
-            q = ureg.Quantity(raw.replace("°C", " degC").replace("°F", " degF").replace("°", " deg"))
+            q = ureg.Quantity(raw)
         except Exception:
             raise InputError(field, f"must be {want}", got=repr(raw)) from None
         if not isinstance(q, ureg.Quantity):
@@ -168,8 +233,28 @@ def _parse(text: str | float | int, field: str, dimension: str) -> float:
                 value = float(q.to(si_unit).magnitude)
         except Exception:
             raise InputError(field, f"must be {want}", got=repr(raw)) from None
+    return within(value, field, dimension, text)
+
+
+def within(value: float, field: str, dimension: str, got: object = None) -> float:
+    """``value`` if it is finite and its magnitude at most :data:`LARGEST` of ``dimension``;
+    else one :class:`InputError` naming ``field``. (How small a value may be is each field's
+    own rule, e.g. a scenario's demand.)
+
+    >>> within(1e300, "--mass", "mass", "1e300 kg")
+    Traceback (most recent call last):
+    ...
+    co2routes.thermo.errors.InputError: --mass: must be a finite number of magnitude at most 1e+09 kg (got 1e300 kg)
+    """
+    got = value if got is None else got
     if not math.isfinite(value):
-        raise InputError(field, "must be a finite number", got=text)
+        raise InputError(field, "must be a finite number", got=got)
+    largest = LARGEST.get(dimension, 1e15)
+    if abs(value) > largest:
+        unit = DIMENSIONS.get(dimension, ("", ""))[0].replace("kilogram", "kg").replace("kelvin", "K")
+        unit = unit.replace("pascal", "Pa").replace("meter", "m").replace("second", "s").replace(
+            "joule", "J").replace("watt", "W").replace("dimensionless", "").replace("delta_degC", "K").replace(" ** ", "**")
+        raise InputError(field, f"must be a finite number of magnitude at most {largest:g} {unit}".rstrip(), got=got)
     return value
 
 

@@ -30,6 +30,25 @@ class Co2RoutesApp(App[int]):
         self.path = path
         self.routes = routes
         self.open_error: str | None = None
+        self.fault: tuple[BaseException, Any] | None = None
+
+    def _handle_exception(self, error: Exception) -> None:
+        """An error nobody caught: keep the scenario in a recovery file, then exit with status 1
+        (:func:`run_app` says where the file is). Textual's own handler does the exiting."""
+        from co2routes.tui.recovery import keep
+
+        if self.fault is None:
+            try:
+                document = self.planner.document
+            except Exception:  # noqa: BLE001 - no planning screen yet: nothing was edited
+                document = None
+            self.fault = (error, keep(document, error))
+        super()._handle_exception(error)
+
+    def _fatal_error(self) -> None:
+        """Exit without printing a traceback on the user's terminal (it is in the recovery log)."""
+        self.bell()
+        self._close_messages_no_wait()
 
     def on_mount(self) -> None:
         opened: Opened
@@ -81,5 +100,20 @@ class Co2RoutesApp(App[int]):
 
 def run_app(path: str | None = None) -> int:
     """Run the interface on ``path`` (or the demo); returns the exit status."""
-    result = Co2RoutesApp(path).run()
+    import sys
+
+    from co2routes.tui.recovery import keep, report
+
+    app = Co2RoutesApp(path)
+    try:
+        result = app.run()
+    except Exception as err:  # noqa: BLE001 - escaped Textual itself: still keep the scenario
+        try:
+            document = app.planner.document
+        except Exception:  # noqa: BLE001
+            document = None
+        app.fault = (err, keep(document, err))
+    if app.fault is not None:
+        print(report(app.fault[1], app.fault[0]), file=sys.stderr)
+        return 1
     return int(result or 0)

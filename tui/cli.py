@@ -79,14 +79,25 @@ def main(argv: Sequence[str] | None = None) -> int:
     args = parser.parse_args(argv)
     if args.command is None:
         return _open_interface(None)
-    from co2routes.tui.output import emit
+    from co2routes.sources.guard import RouteFault
+    from co2routes.tui.output import answer_text, clean_text
 
     try:
-        answer = args._module.run(args)
-        emit(answer, args, sys.stdout)
-    except InputError as err:
-        print(f"{PROG} {args.command}: error: {err}", file=sys.stderr)
+        text = answer_text(args._module.run(args), args)
+    except (InputError, RouteFault) as err:
+        print(clean_text(f"{PROG} {args.command}: error: {err}"), file=sys.stderr)
         return 2
+    except (RecursionError, OverflowError, MemoryError) as err:
+        print(f"{PROG} {args.command}: error: the input is too large or too deep to work with "
+              f"({type(err).__name__})", file=sys.stderr)
+        return 2
+    except Exception as err:  # noqa: BLE001 - a fault of ours: one line, not a traceback
+        print(clean_text(f"{PROG} {args.command}: internal error, please report it: "
+                         f"{type(err).__name__}: {' '.join(str(err).split())[:300]}"), file=sys.stderr)
+        return 1
+    try:
+        sys.stdout.write(text)
+        sys.stdout.flush()
     except BrokenPipeError:
         return 0
     return 0

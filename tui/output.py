@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import json
 import math
+import re
 from typing import IO, Any
 
 from co2routes.thermo.cautions import LOCAL_CODES
@@ -159,13 +160,67 @@ def table_text(answer: dict[str, Any]) -> str:
 
 
 def emit(answer: dict[str, Any], args: Any, out: IO[str]) -> None:
-    """Write ``answer`` to ``out`` as JSON (``--json``) or as the readable table."""
+    """Write ``answer`` to ``out`` as JSON (``--json``) or as the readable table, whole or not at
+    all: the text is built first, so an error leaves nothing half printed."""
+    out.write(answer_text(answer, args))
+
+
+def answer_text(answer: dict[str, Any], args: Any) -> str:
+    """The full text :func:`emit` writes: JSON without inf/NaN, or the table stripped of control
+    characters (text from a file must not drive the terminal)."""
     if getattr(args, "json", False):
-        json.dump(answer, out, indent=2, allow_nan=False, default=_jsonable)
-        out.write("\n")
-        return
+        return json_text(answer) + "\n"
     render = getattr(args._module, "render", None) if hasattr(args, "_module") else None
-    out.write((render(answer, args) if render else table_text(answer)) + "\n")
+    return clean_text(render(answer, args) if render else table_text(answer)) + "\n"
+
+
+_CONTROL = re.compile(r"[\x00-\x08\x0b-\x1f\x7f-\x9f]")
+
+
+def clean_text(text: str) -> str:
+    """``text`` without control characters (escape sequences, bells, carriage returns); line
+    breaks and tabs stay.
+
+    >>> clean_text("demo\x1b[2J name\x07")
+    'demo[2J name'
+    """
+    return _CONTROL.sub("", text)
+
+
+def json_text(answer: dict[str, Any]) -> str:
+    """``answer`` as JSON; a non-finite number becomes ``null`` and adds a warning naming it.
+
+    >>> json_text({"cost_per_kg": float("inf"), "warnings": []}).split()
+    ['{', '"cost_per_kg":', 'null,', '"warnings":', '[', '"cost_per_kg', 'was', 'not', 'a', 'finite', 'number;', 'shown', 'as', 'null"', ']', '}']
+    """
+    bad: list[str] = []
+    data = _finite(_plain(answer), "", bad)
+    if bad and isinstance(data, dict):
+        data["warnings"] = list(data.get("warnings") or []) + [
+            f"{path} was not a finite number; shown as null" for path in bad]
+    return json.dumps(data, indent=2, allow_nan=False)
+
+
+def _plain(obj: Any) -> Any:
+    """Dataclasses as dicts, tuples as lists (what ``json`` would write)."""
+    if hasattr(obj, "__dataclass_fields__") and not isinstance(obj, type):
+        return _plain(_jsonable(obj))
+    if isinstance(obj, dict):
+        return {str(k): _plain(v) for k, v in obj.items()}
+    if isinstance(obj, (list, tuple)):
+        return [_plain(v) for v in obj]
+    return obj
+
+
+def _finite(obj: Any, path: str, bad: list[str]) -> Any:
+    if isinstance(obj, float) and not math.isfinite(obj):
+        bad.append(path or "value")
+        return None
+    if isinstance(obj, dict):
+        return {k: _finite(v, f"{path}.{k}" if path else k, bad) for k, v in obj.items()}
+    if isinstance(obj, list):
+        return [_finite(v, f"{path}[{i}]", bad) for i, v in enumerate(obj)]
+    return obj
 
 
 def _jsonable(obj: Any) -> Any:

@@ -14,6 +14,7 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any, Mapping
 
+from co2routes.sources.limits import file_action, loads
 from co2routes.sources.scenario import demo_text, read_document, to_toml, write_atomic
 from co2routes.thermo.errors import InputError
 
@@ -56,10 +57,8 @@ def stamp_of(path: Path | str) -> Stamp | None:
 
 def open_demo(which: str = "polytunnel") -> Opened:
     """The shipped (invented) demo scenario, not tied to any file."""
-    import tomllib
-
     text = demo_text(which)
-    return Opened(tomllib.loads(text), text, None, None, f"demo {which}")
+    return Opened(loads(text, f"demo {which}"), text, None, None, f"demo {which}")
 
 
 def open_file(path: Path | str) -> Opened:
@@ -67,12 +66,31 @@ def open_file(path: Path | str) -> Opened:
 
     The stamp is taken before reading, so a change made while reading is caught at save time.
     """
-    path = Path(path).expanduser()
-    if path.is_dir():
-        raise InputError(str(path), "is a folder, not a scenario file")
-    stamp = stamp_of(path)
-    document, text = read_document(path)
-    return Opened(document, text, path, stamp, str(path))
+    with file_action(path, "read"):
+        path = Path(path).expanduser()
+        if path.is_dir():
+            raise InputError(str(path), "is a folder, not a scenario file")
+        stamp = stamp_of(path)
+        document, text = read_document(path)
+    return Opened(cleaned(document), text, path, stamp, str(path))
+
+
+def cleaned(value: Any) -> Any:
+    """``value`` (a document) with control characters taken out of every key and string, so
+    that no text from a file drives the terminal.
+
+    >>> cleaned({"name": "a\x1b[2Jb", "site": {"pressure": "1 atm"}})
+    {'name': 'a[2Jb', 'site': {'pressure': '1 atm'}}
+    """
+    from co2routes.tui.output import clean_text
+
+    if isinstance(value, str):
+        return clean_text(value)
+    if isinstance(value, Mapping):
+        return {clean_text(str(k)): cleaned(v) for k, v in value.items()}
+    if isinstance(value, list):
+        return [cleaned(v) for v in value]
+    return value
 
 
 def edited(document: Mapping[str, Any], keys: tuple[str, ...], value: Any) -> dict[str, Any]:
@@ -131,23 +149,26 @@ def save(path: Path | str, document: Mapping[str, Any], *, expected: Stamp | Non
     ``expected``, or when ``replace`` is set (the user said yes); otherwise
     :class:`ChangedOnDisk` (it changed under us) or :class:`InputError` (it already exists).
     """
-    path = Path(path).expanduser()
-    now = stamp_of(path)
-    if now is not None and not replace:
-        if expected is None:
-            raise InputError(str(path), "already exists; choose another name or allow replacing it")
-        if now != expected:
-            raise ChangedOnDisk(str(path), "was changed on disk since it was opened; "
-                                "reload it or allow replacing it")
-    write_atomic(path, to_toml(document), overwrite=now is not None)
-    stamp = stamp_of(path)
-    assert stamp is not None
+    with file_action(path, "saved"):
+        path = Path(path).expanduser()
+        now = stamp_of(path)
+        if now is not None and not replace:
+            if expected is None:
+                raise InputError(str(path), "already exists; choose another name or allow replacing it")
+            if now != expected:
+                raise ChangedOnDisk(str(path), "was changed on disk since it was opened; "
+                                    "reload it or allow replacing it")
+        write_atomic(path, to_toml(document), overwrite=now is not None)
+        stamp = stamp_of(path)
+    if stamp is None:
+        raise InputError(str(path), "cannot be saved: the file is gone right after writing it")
     return stamp
 
 
 def export(path: Path | str, text: str, *, replace: bool = False) -> None:
     """Write an export (Markdown, CSV or JSON text) atomically; never replaces unless asked."""
-    write_atomic(Path(path).expanduser(), text, overwrite=replace)
+    with file_action(path, "written"):
+        write_atomic(Path(path).expanduser(), text, overwrite=replace)
 
 
 #: File endings an export may have, with the format each one picks.

@@ -27,6 +27,8 @@ def load_scenario(args: argparse.Namespace):
     from co2routes.thermo.errors import InputError
 
     scenario = demo() if args.scenario is None else load(args.scenario)
+    from co2routes.sources.limits import MAX_WEIGHT
+
     weights = dict(scenario.weights)
     for item in getattr(args, "weight", []):
         key, _, value = item.partition("=")
@@ -37,8 +39,8 @@ def load_scenario(args: argparse.Namespace):
             weights[key] = float(value)
         except ValueError:
             raise InputError("--weight", "must be CRITERION=NUMBER, e.g. cost=3", got=repr(item)) from None
-        if weights[key] < 0 or weights[key] != weights[key]:
-            raise InputError("--weight", "a weight must be a number of at least 0", got=repr(item))
+        if not 0 <= weights[key] <= MAX_WEIGHT:  # also refuses nan and inf
+            raise InputError("--weight", f"a weight must be a number from 0 to {MAX_WEIGHT:g}", got=repr(item))
     return dataclasses.replace(scenario, weights=weights)
 
 

@@ -24,7 +24,10 @@ def run(args: argparse.Namespace) -> dict:
     with for_option("--which"):
         text = demo_text(args.which)
     if args.file:
-        write_atomic(args.file, text, overwrite=args.overwrite)
+        from co2routes.sources.limits import file_action
+
+        with file_action(args.file, "written"):
+            write_atomic(args.file, text, overwrite=args.overwrite)
     args._text = text
     return {"file": args.file}
 

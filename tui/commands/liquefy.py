@@ -47,17 +47,10 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 
 def _stages(text: str | None) -> int | None:
-    from co2routes.thermo.errors import InputError
+    from co2routes.sources.limits import MAX_STAGES
+    from co2routes.tui.commands.uncertainty import whole
 
-    if text is None:
-        return None
-    try:
-        n = int(text.strip())
-    except ValueError:
-        raise InputError("--stages", "must be a whole number of 1 or more", got=text) from None
-    if n < 1:
-        raise InputError("--stages", "must be a whole number of 1 or more", got=text)
-    return n
+    return None if text is None else whole(text, "--stages", 1, MAX_STAGES)
 
 
 def _kj(value: float) -> float:

@@ -26,9 +26,15 @@ def run(args: argparse.Namespace) -> dict:
     from co2routes.thermo.reaction import parse_reaction, reaction_enthalpy
     from co2routes.thermo.units import parse
 
+    from co2routes.thermo.errors import InputError
+    from co2routes.tui.commands._options import for_option
+
     temperature = parse(args.temperature, "--temperature", "temperature")
-    result = reaction_enthalpy(args.equation, temperature)
-    names = parse_reaction(args.equation).species_names()
+    if len(args.equation) > 300:
+        raise InputError("EQUATION", "must be at most 300 characters", got=f"{len(args.equation)} characters")
+    with for_option("EQUATION"):
+        result = reaction_enthalpy(args.equation, temperature)
+        names = parse_reaction(args.equation).species_names()
     warnings = list(result.warnings)
     if any(n.endswith("(aq)") for n in names):
         warnings.append(

@@ -44,12 +44,9 @@ def run(args: argparse.Namespace) -> dict:
     from co2routes.sources.sensitivity import sensitivity, sensitivity_record
     from co2routes.thermo.errors import InputError
 
-    try:
-        top = int(args.top)
-    except ValueError:
-        raise InputError("--top", "must be a whole number of at least 1", got=repr(args.top)) from None
-    if top < 1:
-        raise InputError("--top", "must be a whole number of at least 1", got=args.top)
+    from co2routes.tui.commands.uncertainty import whole
+
+    whole(args.top, "--top", 1, 10_000)
     scenario, spreads, routes = whatif_inputs(args)
     return {"end_product": scenario.end_product,
             **sensitivity_record(sensitivity(scenario, spreads, routes))}

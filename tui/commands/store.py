@@ -90,6 +90,12 @@ def run(args: argparse.Namespace) -> dict:
         warnings.append(
             f"Pressure {state.pressure_pa / 1e5:.1f} bar is above the rated pressure "
             f"{rated / 1e5:.1f} bar of this vessel.")
+    relief = None if args.relief_pressure is None else parse_positive(
+        args.relief_pressure, "--relief-pressure", "pressure")
+    if relief is not None and state.pressure_pa >= relief:
+        warnings.append(
+            f"Pressure {state.pressure_pa / 1e5:.1f} bar is at or above the relief setting "
+            f"{relief / 1e5:.1f} bar: the relief device would open.")
     found = [cautions.PRESSURE]
     if state.phase in ("two-phase", "liquid") or state.fill_density_kg_l > 0.1:
         found.append(cautions.CYLINDER_HEAT)

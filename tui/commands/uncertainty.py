@@ -22,20 +22,25 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
                         help="only this route (repeat for more; default: every route)")
 
 
-def whole(text: str, option: str, least: int) -> int:
-    """A whole number of at least ``least`` from an option's text.
+def whole(text: str, option: str, least: int, most: int | None = None) -> int:
+    """A whole number from ``least`` to ``most`` (no cap when ``None``) from an option's text.
 
-    >>> whole("10000", "--samples", 1)
+    >>> whole("10000", "--samples", 1, 200000)
     10000
     """
     from co2routes.thermo.errors import InputError
 
+    allowed = f"must be a whole number from {least} to {most}" if most is not None \
+        else f"must be a whole number of at least {least}"
+    raw = str(text).strip()
     try:
-        value = int(str(text).strip())
+        if len(raw) > 20:
+            raise ValueError
+        value = int(raw)
     except ValueError:
-        raise InputError(option, f"must be a whole number of at least {least}", got=repr(text)) from None
-    if value < least:
-        raise InputError(option, f"must be a whole number of at least {least}", got=text)
+        raise InputError(option, allowed, got=repr(text) if len(raw) <= 40 else f"{len(raw)} characters") from None
+    if value < least or (most is not None and value > most):
+        raise InputError(option, allowed, got=text)
     return value
 
 
@@ -70,8 +75,10 @@ def run(args: argparse.Namespace) -> dict:
     from co2routes.sources.uncertainty import uncertainty, uncertainty_record
     from co2routes.tui.commands.sensitivity import whatif_inputs
 
-    samples = whole(args.samples, "--samples", 1)
-    seed = None if args.seed is None else whole(args.seed, "--seed", 0)
+    from co2routes.sources.limits import MAX_SAMPLES
+
+    samples = whole(args.samples, "--samples", 1, MAX_SAMPLES)
+    seed = None if args.seed is None else whole(args.seed, "--seed", 0, 2**63 - 1)
     scenario, spreads, routes = whatif_inputs(args)
     bar = ProgressBar()
     try:

@@ -19,6 +19,19 @@ from co2routes.tui.screens.dialogs import ConfirmDialog, PathDialog
 from co2routes.tui.session import ChangedOnDisk, Opened, export, export_format, open_file, save
 
 
+def exists(path: str | Path) -> bool:
+    """Whether ``path`` names an existing file; ``False`` when the name itself cannot be used
+    (``~nosuchuser/...``, a name too long): the write that follows says why.
+
+    >>> exists("~nosuchuser-x/a.toml"), exists("x" * 300)
+    (False, False)
+    """
+    try:
+        return Path(path).expanduser().exists()
+    except (OSError, RuntimeError, ValueError):
+        return False
+
+
 def json_text(record: dict[str, Any]) -> str:
     """The JSON text the command line prints for ``record`` (``--json``), byte for byte."""
     from co2routes.tui.output import emit
@@ -53,7 +66,10 @@ class Filing:
         try:
             opened = open_file(name)
         except InputError as err:
-            self._say(f"not opened: {err}", True)
+            self._fail(f"not opened: {err}")
+            return False
+        except Exception as err:  # noqa: BLE001 - whatever the file holds, the interface stays
+            self._fail(f"not opened: {name}: {type(err).__name__}: {err}")
             return False
         self.replace_opened(opened)
         self._say(f"opened {opened.path}")
@@ -103,8 +119,8 @@ class Filing:
                                                               "a .toml file; nothing is replaced without asking"))
             if not name:
                 return
-            path = Path(name).expanduser()
-            if not path.suffix:
+            path = Path(name)
+            if not path.suffix and path.name:
                 path = path.with_suffix(".toml")
             if path != self.opened.path:
                 expected = None
@@ -116,10 +132,13 @@ class Filing:
             except ChangedOnDisk:
                 question = f"{path} was changed on disk since it was opened. Replace it with this scenario?"
             except InputError as err:
-                if replace or not path.exists():
-                    self._say(f"not saved: {err}", True)
+                if replace or not exists(path) or not str(err).endswith("allow replacing it"):
+                    self._fail(f"not saved: {err}")
                     return
                 question = f"{path} already exists. Replace it?"
+            except Exception as err:  # noqa: BLE001 - a failed save keeps the scenario on screen
+                self._fail(f"not saved: {path}: {type(err).__name__}: {err}")
+                return
             if not await self.app.push_screen_wait(ConfirmDialog(question)):
                 self._say("not saved")
                 return
@@ -185,18 +204,18 @@ class Filing:
         try:
             fmt = export_format(name)
             text = self.recipe_text(fmt) if what == "recipe" else self.ranking_text(fmt)
-        except InputError as err:
-            self._say(f"not exported: {err}", True)
+        except Exception as err:  # noqa: BLE001 - a failed export is a message
+            self._fail(f"not exported: {err}")
             return
         replace = False
-        if Path(name).expanduser().exists():
+        if exists(name):
             if not await self.app.push_screen_wait(ConfirmDialog(f"{name} already exists. Replace it?")):
                 self._say("not exported")
                 return
             replace = True
         try:
             export(name, text, replace=replace)
-        except InputError as err:
-            self._say(f"not exported: {err}", True)
+        except Exception as err:  # noqa: BLE001 - a failed export keeps the scenario on screen
+            self._fail(f"not exported: {err}")
             return
         self._say(f"exported {what} to {name}")

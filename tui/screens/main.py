@@ -21,6 +21,7 @@ from textual.screen import Screen
 from textual.widgets import Input, ProgressBar, Static, TabbedContent
 
 from co2routes.tui.fields import BASE_FIELDS, Field, match_field, price_value
+from co2routes.tui.output import clean_text
 from co2routes.tui.screens.filing import Filing
 from co2routes.tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES, WhatIf
 from co2routes.tui.screens.working import Working
@@ -209,8 +210,8 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self.query_one("#weights-line", Static).update(line)
 
     def _title(self) -> None:
-        name = str(self.document.get("name", "unnamed scenario"))
-        where = str(self.opened.path) if self.opened.path else "invented demo, not yet saved"
+        name = clean_text(str(self.document.get("name", "unnamed scenario")))
+        where = clean_text(str(self.opened.path)) if self.opened.path else "invented demo, not yet saved"
         mark = "  ● edited" if self.dirty else ""
         self.query_one("#title-line", Static).update(
             Text.assemble(("co2routes ", "bold"), ("│ ", "dim"), name, ("  │ ", "dim"), (where, "italic"),
@@ -218,8 +219,13 @@ class MainScreen(Filing, Working, WhatIf, Screen):
 
     def _say(self, message: str, warn: bool = False) -> None:
         status = self.query_one("#status", Static)
-        status.update(Text(message, style="bold" if warn else ""))
+        status.update(Text(clean_text(message), style="bold" if warn else ""))
         status.set_class(warn, "-warn")
+
+    def _fail(self, message: str) -> None:
+        """A failed action: on the status line and, in full (wrapped), as a notification."""
+        self._say(message, True)
+        self.notify(clean_text(message), title="failed", severity="error", timeout=15, markup=False)
 
     # -- events ---------------------------------------------------------------------------
 
