@@ -80,7 +80,8 @@ def check_result(route_id: str, result: Any) -> RouteResult:
     figures += [(f"reagent {r.name} pure_mass_kg", r.pure_mass_kg, 0.0) for r in result.reagents]
     figures += [(f"reagent {r.name} volume_l", r.volume_l, 0.0) for r in result.reagents if r.volume_l is not None]
     figures += [(f"byproduct {b.name} mass_kg", b.mass_kg, 0.0) for b in result.byproducts]
-    figures += [(f"use {u.name} amount", u.amount, 0.0) for u in result.uses]
+    # a use may be a credit (heat put to use, negative); the priced total is checked by the pipeline
+    figures += [(f"use {u.name} amount", u.amount, None) for u in result.uses]
     figures += [(f"raw_gas {k}", v, 0.0) for k, v in result.raw_gas.mole_fractions.items()]
     if _bad_number(result.co2_kg) or not result.co2_kg > 0:
         raise RouteFault(route_id, f"returned co2_kg = {result.co2_kg!r}; it must be a finite number above zero")
@@ -89,6 +90,18 @@ def check_result(route_id: str, result: Any) -> RouteResult:
             rule = "finite" if low is None else "finite and not negative"
             raise RouteFault(route_id, f"returned {name} = {value!r}; it must be {rule}")
     return result
+
+
+def check_total(route_id: str, total_cost: float | None) -> None:
+    """Refuse a batch whose priced total is negative or not finite (credits larger than costs).
+
+    >>> check_total("demo", -1.0)
+    Traceback (most recent call last):
+    ...
+    co2routes.sources.guard.RouteFault: route 'demo' left out: its batch costs -1 in all; credits cannot exceed costs
+    """
+    if total_cost is not None and (not math.isfinite(total_cost) or total_cost < 0):
+        raise RouteFault(route_id, f"its batch costs {total_cost:g} in all; credits cannot exceed costs")
 
 
 def route_options(route: Route, given: Mapping[str, Any], scenario: Any) -> dict[str, Any]:

@@ -14,7 +14,7 @@ from dataclasses import dataclass
 from typing import Mapping, Sequence
 
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use
-from co2routes.sources.guard import failure_line, option_table_field, route_options, run_route
+from co2routes.sources.guard import check_total, failure_line, option_table_field, route_options, run_route
 from co2routes.sources.plan import NotApplicable, PlannedRoute
 from co2routes.sources.prices import cost_lines
 from co2routes.sources.rank import RouteRow, rank
@@ -80,7 +80,7 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
         uses += (Use("compression (electric motor)", delivery.electricity_kwh, "energy_kwh", "electricity"),)
     energy = Energy(made.energy.electricity_kwh + dried.electricity_kwh + delivery.electricity_kwh,
                     made.energy.fuel_kwh, made.energy.heat_kwh)
-    return PlannedRoute(
+    planned = PlannedRoute(
         route_id=route.id, label=route.label, made=made, product_kg=product_kg, uses=uses,
         energy=energy, time_h=max(made.time_h, delivery.time_h),
         warnings=_unique(made.warnings + dried.warnings + delivery.warnings),
@@ -88,6 +88,8 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
         notes=_unique(made.notes + delivery.notes),
         dryer=dried.dryer, delivery=delivery if scenario.end_product != "gas" else None,
         costs=cost_lines(made.reagents, uses, scenario.prices))
+    check_total(route.id, planned.total_cost)
+    return planned
 
 
 def _unique(items: Sequence[str]) -> tuple[str, ...]:
