@@ -10,8 +10,8 @@ others are still ranked.
 
 from __future__ import annotations
 
-from dataclasses import dataclass
-from typing import Mapping, Sequence
+from dataclasses import dataclass, field
+from typing import Any, Mapping, Sequence
 
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use
 from co2routes.sources.guard import check_total, failure_line, option_table_field, route_options, run_route
@@ -20,6 +20,7 @@ from co2routes.sources.prices import cost_lines
 from co2routes.sources.rank import RouteRow, rank
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
+from co2routes.sources.uses import demand_fields
 from co2routes.thermo.errors import InputError
 
 
@@ -39,6 +40,8 @@ class Comparison:
     rows: tuple[RouteRow, ...]
     failures: tuple[str, ...]
     not_applicable: tuple[NotApplicable, ...] = ()
+    #: the demand per day and where it came from (:func:`co2routes.sources.uses.demand_fields`)
+    demand: Mapping[str, Any] = field(default_factory=dict)
 
 
 def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
@@ -120,7 +123,7 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
             failures.append(failure_line(route, err))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
                       dict(scenario.weights), rank(results, scenario.weights), tuple(failures),
-                      tuple(refused))
+                      tuple(refused), demand_fields(scenario))
 
 
 def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:

@@ -111,6 +111,7 @@ def comparison_record(comparison: Comparison) -> dict[str, Any]:
         # the answer's own lists, as every command has: what went wrong, every route's cautions
         "warnings": list(comparison.failures),
         "cautions": list(dict.fromkeys(c for row in comparison.rows for c in row.result.cautions)),
+        **dict(comparison.demand),
     }
 
 

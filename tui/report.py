@@ -116,6 +116,8 @@ def comparison_table(comparison: Comparison) -> str:
     body = _rows(record)
     widths = [max(len(x) for x in col) for col in zip(head, *body)]
     lines = [f"{record['scenario']}: end product {record['end_product']}, prices in {record['currency']}"]
+    if not record.get("demand_from", "the scenario").startswith("the scenario"):
+        lines.insert(0, f"demand {record['demand_from']}")
     lines.append("  ".join(h.ljust(w) for h, w in zip(head, widths)))
     lines.append("  ".join("-" * w for w in widths))
     lines += ["  ".join(c.rjust(w) if i != 1 else c.ljust(w) for i, (c, w) in enumerate(zip(row, widths)))

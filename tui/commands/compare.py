@@ -48,12 +48,10 @@ def run(args: argparse.Namespace) -> dict:
     """The comparison as its JSON record (the table and other formats come from ``render``)."""
     from co2routes.sources.pipeline import compare
     from co2routes.sources.records import comparison_record
-    from co2routes.sources.uses import demand_fields
 
-    scenario = load_scenario(args)
-    comparison = compare(scenario)
-    args._comparison, args._demand = comparison, demand_fields(scenario)
-    return {**comparison_record(comparison), **args._demand}
+    comparison = compare(load_scenario(args))
+    args._comparison = comparison
+    return comparison_record(comparison)
 
 
 def render(answer: dict, args: argparse.Namespace) -> str:
@@ -64,6 +62,4 @@ def render(answer: dict, args: argparse.Namespace) -> str:
         return comparison_csv(args._comparison).rstrip("\n")
     if args.markdown:
         return comparison_markdown(args._comparison).rstrip("\n")
-    demand = args._demand
-    head = "" if demand["demand_from"].startswith("the scenario") else f"demand {demand['demand_from']}\n"
-    return head + comparison_table(args._comparison)
+    return comparison_table(args._comparison)
