@@ -32,9 +32,14 @@ def run(args: argparse.Namespace) -> dict:
     temperature = parse(args.temperature, "--temperature", "temperature")
     if len(args.equation) > 300:
         raise InputError("EQUATION", "must be at most 300 characters", got=f"{len(args.equation)} characters")
-    with for_option("EQUATION"):
-        result = reaction_enthalpy(args.equation, temperature)
-        names = parse_reaction(args.equation).species_names()
+    try:
+        with for_option("EQUATION"):
+            result = reaction_enthalpy(args.equation, temperature)
+            names = parse_reaction(args.equation).species_names()
+    except InputError as err:
+        if "data cover" in err.allowed:  # a species' data stop short of the temperature asked
+            raise InputError("--temperature", err.allowed, err.got) from None
+        raise
     warnings = list(result.warnings)
     if any(n.endswith("(aq)") for n in names):
         warnings.append(
