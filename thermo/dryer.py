@@ -42,14 +42,14 @@ from co2routes.thermo.gasmix import gas_state, normalise
 from co2routes.thermo.packed_bed import (constant_pattern_shape, ergun_gradient, ergun_velocity, interpolate,
                                mtz_length)
 
-#: Beverage-grade CO2 moisture limit [ppm v/v]: ISBT quality guidelines (REFERENCES, R).
+#: Beverage-grade CO2 moisture limit [ppm v/v]: ISBT quality guidelines (docs/references.md, R).
 ISBT_WATER_PPMV = 20.0
 ISBT_SOURCE = "ISBT quality guidelines for beverage-grade CO2: water at most 20 ppm v/v"
 _FT = 0.3048
 _PSI = 6894.757293168361
 #: Design pressure gradient of downflow desiccant beds, 0.33 psi/ft [Pa/m] (GPSA sec. 20, M).
 DESIGN_GRADIENT_PA_M = 0.33 * _PSI / _FT
-#: Largest total bed pressure drop, 8 psi [Pa] (Abdel-Aal, Aggour & Fahim 2003; REFERENCES R).
+#: Largest total bed pressure drop, 8 psi [Pa] (Abdel-Aal, Aggour & Fahim 2003; docs/references.md).
 MAX_BED_DROP_PA = 8.0 * _PSI
 #: Heat capacity of liquid water near 25 degC [J/(kg K)] (IAPWS-95: 4.18 kJ/(kg K)).
 _CP_WATER = 4180.0

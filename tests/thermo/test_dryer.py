@@ -19,10 +19,10 @@ BASE = DryerInput(co2_flow_kg_s=2.0 / DAY, inlet_temperature_k=298.15,
 
 def test_default_target_is_the_isbt_limit():
     r = size_dryer(BASE)
-    # ISBT quality guidelines: water at most 20 ppm v/v in beverage-grade CO2 (REFERENCES, R)
+    # ISBT quality guidelines: water at most 20 ppm v/v in beverage-grade CO2 (docs/references.md, R)
     assert r.target_ppmv == ISBT_WATER_PPMV == 20.0
     assert "ISBT" in r.target_basis
-    # 20 ppmv at 1 atm is a frost point of -55.3 degC (REFERENCES, C; Murphy & Koop 2005), 0.1 K
+    # 20 ppmv at 1 atm is a frost point of -55.3 degC (docs/references.md, C; Murphy & Koop 2005), 0.1 K
     assert r.target_dew_point_k - 273.15 == pytest.approx(-55.3, abs=0.1)
 
 
@@ -100,7 +100,7 @@ def test_drier_target_gives_a_larger_bed_or_a_warning():
 
 
 def test_3a_reaches_a_lower_dew_point_than_silica_gel():
-    # REFERENCES (from memory): silica gel -50 to -60 degC; molecular sieves -75 to -100 degC
+    # docs/references.md (from memory): silica gel -50 to -60 degC; molecular sieves -75 to -100 degC
     a3 = size_dryer(BASE)
     sg = size_dryer(dataclasses.replace(BASE, desiccant="silica-gel"))
     assert a3.outlet_dew_point_k < sg.outlet_dew_point_k
