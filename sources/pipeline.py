@@ -15,7 +15,7 @@ from typing import Mapping, Sequence
 
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use, parse_options
 from co2routes.sources.plan import NotApplicable, PlannedRoute
-from co2routes.sources.prices import cost_lines
+from co2routes.sources.prices import cost_lines, missing_prices, route_prices
 from co2routes.sources.rank import RouteRow, rank
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
@@ -81,14 +81,15 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
         uses += (Use("compression (electric motor)", delivery.electricity_kwh, "energy_kwh", "electricity"),)
     energy = Energy(made.energy.electricity_kwh + dried.electricity_kwh + delivery.electricity_kwh,
                     made.energy.fuel_kwh, made.energy.heat_kwh)
+    costs = cost_lines(made.reagents, uses, scenario.prices, route_prices(route))
     return PlannedRoute(
         route_id=route.id, label=route.label, made=made, product_kg=product_kg, uses=uses,
         energy=energy, time_h=max(made.time_h, delivery.time_h),
-        warnings=_unique(made.warnings + dried.warnings + delivery.warnings),
+        warnings=_unique(made.warnings + dried.warnings + delivery.warnings + missing_prices(costs)),
         cautions=_unique(made.cautions + dried.cautions + delivery.cautions),
         notes=_unique(made.notes + delivery.notes),
         dryer=dried.dryer, delivery=delivery if scenario.end_product != "gas" else None,
-        costs=cost_lines(made.reagents, uses, scenario.prices))
+        costs=costs)
 
 
 def _unique(items: Sequence[str]) -> tuple[str, ...]:

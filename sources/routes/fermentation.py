@@ -21,6 +21,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
+from co2routes.sources.model import RouteModel
 from co2routes.sources.routes._options import NamedDefaultOption, settings
 from co2routes.thermo import cautions
 from co2routes.thermo.errors import InputError
@@ -175,17 +176,5 @@ def compute(request: RouteRequest) -> RouteResult:
         warnings=tuple(warnings), cautions=(cautions.FERMENTER, cautions.ASPHYXIATION), notes=tuple(notes))
 
 
-@dataclass(frozen=True)
-class FermentationRoute:
-    """The route object registered under ``co2routes.sources`` as ``fermentation``."""
-
-    id: str = "fermentation"
-    label: str = "Sugar fermentation"
-    options: tuple[Option, ...] = OPTIONS
-
-    def compute(self, request: RouteRequest) -> RouteResult:
-        """Plan one batch for ``request``."""
-        return compute(request)
-
-
-ROUTE = FermentationRoute()
+#: The route registered under ``co2routes.sources`` as ``fermentation``.
+ROUTE = RouteModel("fermentation", "Sugar fermentation", OPTIONS, compute)
