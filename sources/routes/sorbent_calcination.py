@@ -17,6 +17,7 @@ from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, R
 from co2routes.sources.routes.shared import R, kwh, percent, saturated
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
+from co2routes.thermo.constants import WATER_MOLAR_MASS as M_H2O
 
 #: Sorbent choice -> (species, name as bought, price key, bulk density [kg/m3]). Bulk densities of
 #: granular hydrated lime about 500 and of pebble quicklime about 900 kg/m3 (from memory).
@@ -28,8 +29,6 @@ SORBENTS = {
 VOIDAGE = 0.40
 #: Hours a small kiln takes to heat, calcine and cool one charge (common practice).
 KILN_HOURS = 2.0
-#: Molar mass of water [kg/mol] (IUPAC standard atomic weights).
-M_H2O = 0.0180153
 
 #: Options of the release step, shared with the breath route.
 RELEASE_OPTIONS = (
