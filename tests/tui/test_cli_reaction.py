@@ -2,20 +2,12 @@
 
 from __future__ import annotations
 
-import json
-
 import pytest
 
+from clihelp import run_json
 from co2routes.tui.cli import main
 
 NAHCO3_HCL = "NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)"
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    out = capsys.readouterr().out
-    assert code == 0
-    return json.loads(out)
 
 
 def test_reaction_json(capsys):

@@ -2,19 +2,11 @@
 
 from __future__ import annotations
 
-import json
-
 import pytest
 
 from co2routes.thermo import cautions
+from clihelp import run_json
 from co2routes.tui.cli import COMMANDS, main
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    out = capsys.readouterr().out
-    assert code == 0
-    return json.loads(out)
 
 
 def test_verbs_are_registered():
