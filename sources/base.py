@@ -197,13 +197,20 @@ class Energy:
 
 @dataclass(frozen=True, slots=True)
 class CostLine:
-    """One line of the cost breakdown; ``cost`` is ``None`` when its price is unknown."""
+    """One line of the cost breakdown; ``cost`` is ``None`` when its price is unknown.
+
+    ``price_key`` names the price book entry the line needs; ``price_from`` says where its price
+    came from: ``"price book"``, ``"route default"`` (the route's own default, the book lacking
+    the key) or ``"none"`` (no price: the cost is unknown).
+    """
 
     item: str
     amount: float
     unit: str
     unit_price: float | None
     cost: float | None
+    price_key: str = ""
+    price_from: str = ""
 
 
 @dataclass(frozen=True, slots=True)

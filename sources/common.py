@@ -4,6 +4,8 @@ from __future__ import annotations
 
 from typing import Mapping
 
+from co2routes.thermo.constants import WATER_MOLAR_MASS
+
 #: Heat capacity of a dilute aqueous batch liquor [J/(kg K)]: that of liquid water at 25 degC,
 #: 4181 J/(kg K) (IAPWS-95). Salty liquors are a few per cent lower; the temperature change it
 #: gives is an estimate to within about 10 % for liquors under 20 % salt.
@@ -27,19 +29,9 @@ def temperature_change(heat_kj: float, liquor_kg: float, cp_j_kg_k: float = LIQU
     return -heat_kj * 1000.0 / (liquor_kg * cp_j_kg_k)
 
 
-def normalised(fractions: Mapping[str, float]) -> dict[str, float]:
-    """Mole fractions scaled to sum to one, zero entries dropped.
-
-    >>> normalised({"CO2": 2.0, "H2O": 2.0, "N2": 0.0})
-    {'CO2': 0.5, 'H2O': 0.5}
-    """
-    total = sum(fractions.values())
-    return {k: v / total for k, v in fractions.items() if v > 0.0}
-
-
-#: Molar masses [kg/mol] from IUPAC standard atomic weights (abridged, 2021) for the gases the
-#: raw-gas balances use.
-MOLAR_MASS = {"CO2": 0.0440095, "H2O": 0.0180153, "N2": 0.0280134, "O2": 0.0319988, "Ar": 0.039948,
+#: Molar masses [kg/mol] from IUPAC standard atomic weights (abridged, 2021; water as in
+#: :mod:`co2routes.thermo.constants`) for the gases the raw-gas balances use.
+MOLAR_MASS = {"CO2": 0.0440095, "H2O": WATER_MOLAR_MASS, "N2": 0.0280134, "O2": 0.0319988, "Ar": 0.039948,
               "CO": 0.0280101, "C2H5OH": 0.0460684}
 
 

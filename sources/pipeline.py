@@ -16,7 +16,7 @@ from typing import Any, Mapping, Sequence
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use
 from co2routes.sources.guard import check_total, failure_line, option_table_field, route_options, run_route
 from co2routes.sources.plan import NotApplicable, PlannedRoute
-from co2routes.sources.prices import cost_lines
+from co2routes.sources.prices import cost_lines, missing_prices, route_prices
 from co2routes.sources.rank import RouteRow, rank
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
@@ -86,11 +86,11 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
     planned = PlannedRoute(
         route_id=route.id, label=route.label, made=made, product_kg=product_kg, uses=uses,
         energy=energy, time_h=max(made.time_h, delivery.time_h),
-        warnings=_unique(made.warnings + dried.warnings + delivery.warnings),
+        warnings=_unique(made.warnings + dried.warnings + delivery.warnings + missing_prices(costs)),
         cautions=_unique(made.cautions + dried.cautions + delivery.cautions),
         notes=_unique(made.notes + delivery.notes),
         dryer=dried.dryer, delivery=delivery if scenario.end_product != "gas" else None,
-        costs=cost_lines(made.reagents, uses, scenario.prices))
+        costs=cost_lines(made.reagents, uses, scenario.prices, route_prices(route)))
     check_total(route.id, planned.total_cost)
     return planned
 

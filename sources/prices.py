@@ -7,7 +7,8 @@ A missing price makes that cost unknown (``None``), never zero.
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+import tomllib
+from dataclasses import dataclass, replace
 from importlib import resources
 from pathlib import Path
 from typing import Any, Iterable, Mapping
@@ -143,38 +144,79 @@ def load_book(path: Path | None = None) -> PriceBook:
     return _book_from_toml(data, where)
 
 
-def reagent_cost(reagent: Reagent, book: PriceBook) -> CostLine:
-    """The cost line of a reagent as bought.
+def find_price(key: str, book: PriceBook, defaults: Mapping[str, Price] | None = None) -> tuple[Price | None, str]:
+    """The price of ``key`` and where it came from: the book first, then the route's defaults.
+
+    >>> book = PriceBook("EUR", {"water": parse_price("water", "3 / m**3")})
+    >>> find_price("water", book, {"water": parse_price("water", "9 / m**3")})[1]
+    'price book'
+    >>> find_price("feed", book, {"feed": parse_price("feed", "2 / kg")})[1]
+    'route default'
+    >>> find_price("feed", book)
+    (None, 'none')
+    """
+    price = book.get(key)
+    if price is not None:
+        return price, "price book"
+    price = (defaults or {}).get(key)
+    return (price, "route default") if price is not None else (None, "none")
+
+
+def reagent_cost(reagent: Reagent, book: PriceBook, defaults: Mapping[str, Price] | None = None) -> CostLine:
+    """The cost line of a reagent as bought (its price from the book, else ``defaults``).
 
     With a strength on the price, the price is per kg of solution at that strength and the
     reagent is costed by its pure content: cost = pure mass / strength x price. A per-volume price
     uses the reagent's volume.
     """
-    price = book.get(reagent.price_key)
+    price, source = find_price(reagent.price_key, book, defaults)
     name = f"{reagent.name}"
+    line = CostLine(name, reagent.mass_kg, "kg", None, None, reagent.price_key, "none")
     if price is None:
-        return CostLine(name, reagent.mass_kg, "kg", None, None)
+        return line
     if price.per == "mass":
         mass = reagent.pure_mass_kg / price.strength if price.strength else reagent.mass_kg
-        return CostLine(name, mass, "kg", price.amount, mass * price.amount)
+        return replace(line, amount=mass, unit_price=price.amount, cost=mass * price.amount, price_from=source)
     if price.per == "volume" and reagent.volume_l is not None:
         volume_m3 = reagent.volume_l / 1000.0
-        return CostLine(name, reagent.volume_l, "L", price.amount / 1000.0, volume_m3 * price.amount)
-    return CostLine(name, reagent.mass_kg, "kg", None, None)
+        return replace(line, amount=reagent.volume_l, unit="L", unit_price=price.amount / 1000.0,
+                       cost=volume_m3 * price.amount, price_from=source)
+    return line
 
 
-def use_cost(use: Use, book: PriceBook) -> CostLine:
+def use_cost(use: Use, book: PriceBook, defaults: Mapping[str, Price] | None = None) -> CostLine:
     """The cost line of a use (electricity, fuel, heat, water, disposal)."""
-    price = book.get(use.price_key)
+    price, source = find_price(use.price_key, book, defaults)
     si = {"energy_kwh": ("energy", _KWH, "kWh"), "mass_kg": ("mass", 1.0, "kg"),
           "volume_m3": ("volume", 1.0, "m³"), "volume_l": ("volume", 1e-3, "L")}[use.dimension]
     per, factor, unit = si
     if price is None or price.per != per:
-        return CostLine(use.name, use.amount, unit, None, None)
+        return CostLine(use.name, use.amount, unit, None, None, use.price_key, "none")
     unit_price = price.amount * factor
-    return CostLine(use.name, use.amount, unit, unit_price, use.amount * unit_price)
+    return CostLine(use.name, use.amount, unit, unit_price, use.amount * unit_price, use.price_key, source)
 
 
-def cost_lines(reagents: Iterable[Reagent], uses: Iterable[Use], book: PriceBook) -> tuple[CostLine, ...]:
-    """Every cost line of a batch: reagents first, then uses."""
-    return tuple(reagent_cost(r, book) for r in reagents) + tuple(use_cost(u, book) for u in uses)
+def cost_lines(reagents: Iterable[Reagent], uses: Iterable[Use], book: PriceBook,
+               defaults: Mapping[str, Price] | None = None) -> tuple[CostLine, ...]:
+    """Every cost line of a batch: reagents first, then uses; ``defaults`` are the route's own
+    prices, used for a key the book lacks."""
+    return (tuple(reagent_cost(r, book, defaults) for r in reagents)
+            + tuple(use_cost(u, book, defaults) for u in uses))
+
+
+def route_prices(route: Any) -> dict[str, Price]:
+    """A route's own default prices, parsed (none for a route that ships none)."""
+    if hasattr(route, "default_prices"):
+        return route.default_prices()
+    raw = getattr(route, "prices", None) or {}
+    return {key: parse_price(key, value, f"route {route.id} prices") for key, value in raw.items()}
+
+
+def missing_prices(lines: Iterable[CostLine]) -> tuple[str, ...]:
+    """One warning per price key no book or route default prices, naming the key.
+
+    >>> missing_prices([CostLine("brine", 2.0, "kg", None, None, "brine", "none")])
+    ("no price for 'brine' (brine): add it to the price book; the cost is unknown",)
+    """
+    return tuple(f"no price for {line.price_key!r} ({line.item}): add it to the price book; the cost is unknown"
+                 for line in lines if line.price_from == "none" and line.price_key)

@@ -9,12 +9,11 @@ temperature, which the bed and fan estimates here do not resolve.
 
 from __future__ import annotations
 
+from co2routes.thermo.constants import R
 from co2routes.thermo.errors import InputError, require_positive
 
 #: Molar mass of dry air [kg/mol] (Lemmon et al. 2000, J. Phys. Chem. Ref. Data 29, 331: 28.9586 g/mol).
 AIR_MOLAR_MASS = 0.0289586
-#: Molar gas constant [J/(mol K)] (CODATA 2018).
-R = 8.314462618
 
 
 def air_density(temperature_k: float, pressure_pa: float) -> float:

@@ -25,9 +25,9 @@ import math
 from dataclasses import dataclass
 
 from co2routes.thermo import species
+from co2routes.thermo.constants import R
 from co2routes.thermo.errors import InputError
 
-R = 8.314462618  # J/(mol K), CODATA 2018
 P0 = 1e5  # Pa, standard pressure of the NASA data
 T_MIN = 700.0  # K
 T_MAX = 1373.15  # K (1100 degC), calcite extended above 1200 K

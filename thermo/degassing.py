@@ -18,6 +18,7 @@ from dataclasses import dataclass
 from typing import Mapping
 
 from co2routes.thermo import henry, water
+from co2routes.thermo.constants import R
 from co2routes.thermo.errors import InputError
 
 #: Hcp at 298.15 K [mol/(m3 Pa)] and d ln Hcp / d(1/T) [K] (Sander 2015; see module docstring).
@@ -67,7 +68,7 @@ def dissolution_enthalpy(gas: str) -> float:
     -19.95
     """
     b = henry.DLNH_DINVT_K if gas == "CO2" else OTHER_GASES[gas][1]
-    return -8.314462618 * b
+    return -R * b
 
 
 def loaded(partial_pressures_pa: Mapping[str, float], temperature_k: float,

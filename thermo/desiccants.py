@@ -18,10 +18,11 @@ from functools import lru_cache
 from importlib import resources
 from typing import Mapping
 
+from co2routes.thermo.constants import R, WATER_MOLAR_MASS
 from co2routes.thermo.errors import InputError, require_positive
 
-#: Specific gas constant of water [J/(kg K)]: 8.314462618 / 0.018015268 (CODATA R, IAPWS M).
-R_WATER = 461.52
+#: Specific gas constant of water [J/(kg K)]: R / M_H2O (:mod:`co2routes.thermo.constants`), 461.52.
+R_WATER = R / WATER_MOLAR_MASS
 
 #: The desiccant ids, in the order a command lists them.
 DESICCANT_IDS: tuple[str, ...] = (

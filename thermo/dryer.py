@@ -24,33 +24,26 @@ Method (one fixed bed, downflow, sized for one adsorption period):
 
 The lowest outlet water content is the larger of the desiccant's practice floor and the water
 pressure over the residual loading at the bed's product end.
+
+The steps live in two modules by job: :mod:`co2routes.thermo.dryer_duty` (steps 1-2: the water
+to take up and the working capacity) and :mod:`co2routes.thermo.dryer_bed` (steps 3-5: geometry,
+pressure drop, breakthrough front); this module sizes, prices the regeneration (step 6) and draws
+the breakthrough curve.
 """
 
 from __future__ import annotations
 
-import math
 from dataclasses import dataclass, field
 from typing import Mapping
 
-from co2routes.thermo import water, water_co2
-from co2routes.thermo.co2 import ATMOSPHERE_PA, MOLAR_MASS as CO2_MOLAR_MASS
-from co2routes.thermo.desiccants import (DESICCANT_IDS, Desiccant, defaults, equilibrium_loading,
-                               extrapolation_warning, get_desiccant, outlet_limit,
-                               suggest_desiccant)
-from co2routes.thermo.errors import InputError, require_positive
-from co2routes.thermo.gasmix import gas_state, normalise
-from co2routes.thermo.packed_bed import (constant_pattern_shape, ergun_gradient, ergun_velocity, interpolate,
-                               mtz_length)
+from co2routes.thermo import water_co2
+from co2routes.thermo.co2 import ATMOSPHERE_PA
+from co2routes.thermo.desiccants import DESICCANT_IDS, Desiccant, defaults, get_desiccant
+from co2routes.thermo.dryer_bed import DESIGN_GRADIENT_PA_M, MAX_BED_DROP_PA, Bed, front_shape, size_bed
+from co2routes.thermo.dryer_duty import ISBT_SOURCE, ISBT_WATER_PPMV, Duty, duty, inlet_ppmv
+from co2routes.thermo.errors import InputError
+from co2routes.thermo.packed_bed import interpolate
 
-#: Beverage-grade CO2 moisture limit [ppm v/v]: ISBT quality guidelines (REFERENCES, R).
-ISBT_WATER_PPMV = 20.0
-ISBT_SOURCE = "ISBT quality guidelines for beverage-grade CO2: water at most 20 ppm v/v"
-_FT = 0.3048
-_PSI = 6894.757293168361
-#: Design pressure gradient of downflow desiccant beds, 0.33 psi/ft [Pa/m] (GPSA sec. 20, M).
-DESIGN_GRADIENT_PA_M = 0.33 * _PSI / _FT
-#: Largest total bed pressure drop, 8 psi [Pa] (Abdel-Aal, Aggour & Fahim 2003; REFERENCES R).
-MAX_BED_DROP_PA = 8.0 * _PSI
 #: Heat capacity of liquid water near 25 degC [J/(kg K)] (IAPWS-95: 4.18 kJ/(kg K)).
 _CP_WATER = 4180.0
 
@@ -140,56 +133,6 @@ class DryerResult:
     cautions: tuple[str, ...]
 
 
-def inlet_ppmv(inp: DryerInput) -> float:
-    """Inlet water [ppmv] from whichever inlet field of ``inp`` is set (saturated when none).
-
-    ppmv = RH y_sat(T, P), y_sat(T_dp, P), as given, or y_sat(T, P) (saturated), with y_sat the
-    water CO2 holds at T and P from :func:`co2routes.thermo.water_co2.saturated_water_in_co2`
-    (Spycher, Pruess & Ennis-King 2003; the dry gas is treated as CO2, so at high pressure a
-    gas rich in air or nitrogen holds somewhat less than this).
-
-    >>> round(inlet_ppmv(DryerInput(1e-5, 298.15, inlet_relative_humidity=0.5)), -1)
-    15780.0
-    """
-    t, p = inp.inlet_temperature_k, inp.inlet_pressure_pa
-    y_sat = water_co2.saturated_water_in_co2(t, p).water_ppmv
-    given = [n for n in ("inlet_water_ppmv", "inlet_relative_humidity", "inlet_dew_point_k")
-             if getattr(inp, n) is not None]
-    if len(given) > 1:
-        raise InputError("inlet water", "give one of ppmv, relative humidity or dew point",
-                         got=", ".join(given))
-    if inp.inlet_relative_humidity is not None:
-        rh = inp.inlet_relative_humidity
-        if not 0.0 < rh <= 1.0:
-            raise InputError("relative humidity", "must be above 0 and at most 100 %", got=f"{rh:.4g}")
-        return rh * y_sat
-    if inp.inlet_dew_point_k is not None:
-        if inp.inlet_dew_point_k > t + 1e-9:
-            raise InputError("inlet dew point", "cannot be above the inlet temperature (the gas "
-                             "would hold liquid water)", got=inp.inlet_dew_point_k)
-        return water_co2.saturated_water_in_co2(inp.inlet_dew_point_k, p, vapour=True).water_ppmv
-    if inp.inlet_water_ppmv is not None:
-        ppmv = require_positive("inlet water", inp.inlet_water_ppmv)
-        if ppmv > y_sat * (1 + 1e-9):
-            raise InputError("inlet water", f"is above saturation ({y_sat:.6g} ppmv at the "
-                             "inlet temperature and pressure)", got=ppmv)
-        return ppmv
-    return y_sat
-
-
-def _target_ppmv(inp: DryerInput) -> tuple[float, str]:
-    """Target [ppmv] and where it comes from."""
-    if inp.target_ppmv is not None and inp.target_dew_point_k is not None:
-        raise InputError("target", "give a target dew point or a target ppmv, not both")
-    if inp.target_ppmv is not None:
-        return require_positive("target ppmv", inp.target_ppmv), "given as ppmv"
-    if inp.target_dew_point_k is not None:
-        return (water_co2.saturated_water_in_co2(inp.target_dew_point_k, inp.inlet_pressure_pa,
-                                                 vapour=True).water_ppmv,
-                "given as a dew point")
-    return ISBT_WATER_PPMV, ISBT_SOURCE
-
-
 def size_dryer(inp: DryerInput) -> DryerResult:
     """Size one desiccant bed for one adsorption period (method in the module notes).
 
@@ -208,179 +151,70 @@ def size_dryer(inp: DryerInput) -> DryerResult:
     >>> r = size_dryer(DryerInput(co2_flow_kg_s=2.0 / 86400, inlet_temperature_k=298.15,
     ...                           desiccant="molecular-sieve-3a", cycle_s=7 * 86400))
     >>> round(r.water_load_kg_per_cycle, 3), r.reaches_target
-    (0.185, True)
+    (0.187, True)
     """
-    d = get_desiccant(inp.desiccant)
-    m_co2 = require_positive("flow", inp.co2_flow_kg_s)
-    cycle = require_positive("cycle", inp.cycle_s)
-    t_in = require_positive("inlet temperature", inp.inlet_temperature_k)
-    p = require_positive("inlet pressure", inp.inlet_pressure_pa)
-    if not 233.15 <= t_in <= 353.15:
-        raise InputError("inlet temperature", "must be from -40 degC to 80 degC for a desiccant dryer",
-                         got=f"{t_in - 273.15:.2f} degC")
-    dry = normalise(inp.dry_composition)
-    if dry.get("CO2", 0.0) <= 0.0:
-        raise InputError("gas", "must contain CO2", got=dict(inp.dry_composition))
-    p_sat = water.vapor_pressure(t_in)
-    if p_sat >= p:
-        raise InputError("inlet pressure", "must be above the water vapour pressure at the inlet "
-                         f"temperature ({p_sat:.6g} Pa)", got=p)
-    y_in = inlet_ppmv(inp) * 1e-6
-    target, basis = _target_ppmv(inp)
-    y_t = target * 1e-6
-    if y_t >= y_in:
-        raise InputError("target", "must be drier than the inlet gas "
-                         f"({y_in * 1e6:.6g} ppmv, dew point {water_co2.dew_point_in_co2(y_in * 1e6, p) - 273.15:.1f} degC)",
-                         got=f"{target:.6g} ppmv")
     warnings: list[str] = []
-    p_out, q_res = outlet_limit(d, t_in)
-    if p_out >= y_in * p:
-        raise InputError("desiccant", f"{d.id} cannot dry this gas: its outlet floor "
-                         f"({p_out:.4g} Pa of water) is above the inlet's ({y_in * p:.4g} Pa)")
-    y_out = min(p_out / p, y_t)
-    reaches = p_out <= y_t * p * (1 + 1e-9)
-    suggestion = None
-    if not reaches:
-        y_out = p_out / p
-        suggestion = suggest_desiccant(t_in, p, target, exclude=d.id)
-        better = (f"{suggestion} reaches it" if suggestion else
-                  "none of the listed desiccants reaches it at this pressure: dry at a higher "
-                  "pressure or cool the gas first")
-        warnings.append(f"{d.id} reaches only about {y_out * 1e6:.3g} ppmv (dew point "
-                        f"{water.dew_point(p_out) - 273.15:.1f} degC) at this pressure, wetter than "
-                        f"the target {target:.3g} ppmv; {better}.")
-    # flows
-    n_dry = m_co2 / CO2_MOLAR_MASS / dry["CO2"]                       # mol/s of dry gas
-    mw = water.WATER_MOLAR_MASS
-    water_in = n_dry * y_in / (1.0 - y_in) * mw
-    water_rate = water_in - n_dry * y_out / (1.0 - y_out) * mw       # kg/s taken up
-    load = water_rate * cycle
-    # capacity
-    if d.kind == "deliquescent":
-        q_eq = d.capacity_kg_per_kg
-        working = d.capacity_kg_per_kg * d.usable_fraction
-    else:
-        q_eq = equilibrium_loading(d, y_in * p, t_in)
-        working = q_eq - q_res
-        note = extrapolation_warning(d, y_in * p, t_in)
-        if note:
-            warnings.append(note)
-    if working <= 0.0:
-        raise InputError("desiccant", f"{d.id} has no working capacity at these conditions")
-    # gas and geometry
-    wet = {k: v * (1.0 - y_in) for k, v in dry.items()}
-    wet["H2O"] = wet.get("H2O", 0.0) + y_in
-    gas = gas_state(t_in, p, wet)
-    q_vol = n_dry / (1.0 - y_in) * gas.molar_mass_kg_mol / gas.density_kg_m3   # m3/s at inlet
-    dp = inp.particle_diameter_m or d.particle_diameter_m
-    rho_b, eps = d.bulk_density_kg_m3, d.voidage
-    v_limit = ergun_velocity(DESIGN_GRADIENT_PA_M, dp, eps, gas.density_kg_m3, gas.viscosity_pa_s)
+    job = duty(inp, warnings)
+    bed = size_bed(inp, job, warnings)
+    heat, energy_cost, charge_cost, cost = _regeneration(inp, job, bed)
+    warnings.extend(_notes(job.desiccant, _relative_humidity(job)))
+    return _result(job, bed, heat, energy_cost, charge_cost, cost, warnings)
 
-    def lengths(diameter: float) -> tuple[float, float]:
-        area = math.pi * diameter**2 / 4.0
-        return load / (rho_b * area * working), mtz_length(q_vol / area, dp)
 
-    if inp.diameter_m is not None:
-        diameter = require_positive("diameter", inp.diameter_m)
-    else:
-        ratio = require_positive("length-to-diameter ratio",
-                                 inp.length_to_diameter or defaults()["length_to_diameter"])
-        lo, hi = 1e-4, 20.0
-        for _ in range(200):
-            mid = math.sqrt(lo * hi)
-            if sum(lengths(mid)) / mid > ratio:
-                lo = mid
-            else:
-                hi = mid
-        diameter = math.sqrt(lo * hi)
-        d_velocity = math.sqrt(4.0 * q_vol / (math.pi * v_limit))
-        if d_velocity > diameter:
-            diameter = d_velocity
-            warnings.append("The diameter is set by the allowable velocity, not by the "
-                            "length-to-diameter ratio.")
-    area = math.pi * diameter**2 / 4.0
-    l_sat, l_mtz = lengths(diameter)
-    velocity = q_vol / area
-    # breakthrough (constant-pattern LDF front, rate set by the MTZ)
-    v_front = water_rate / (rho_b * area * working)                   # m/s
-    xs, kt = _front_shape(d, y_in * p, t_in, q_eq)
-    k = (interpolate(0.95, xs, kt) - interpolate(0.05, xs, kt)) / (l_mtz / v_front)
-    x_b = (y_t - y_out) / (y_in - y_out) if reaches else 0.05
-    x_b = max(x_b, xs[0])
-    # GPSA's zone allowance keeps half a zone of margin at the front's 5 % edge; the same margin
-    # is kept at the target concentration by adding the stretch of front between the two.
-    length = l_sat + l_mtz + v_front * (interpolate(0.05, xs, kt) - interpolate(x_b, xs, kt)) / k
-    t_b = length / v_front + interpolate(x_b, xs, kt) / k
-    if t_b < cycle:
-        length += (cycle - t_b) * v_front
-        t_b = cycle
-    t_s = length / v_front
-    if not reaches:
-        # a bed sized to the front's 5 % edge passes more than the floor well before then when the
-        # front is wide (a near-linear isotherm): say what leaves at the end of the cycle
-        t_of = [t_s + v / k for v in kt]
-        x_end = 0.0 if cycle <= t_of[0] else (1.0 if cycle >= t_of[-1] else interpolate(cycle, t_of, xs))
-        y_end = y_out + x_end * (y_in - y_out)
-        if y_end > 1.5 * y_out:
-            warnings.append(f"By the end of the {cycle / 3600.0:.3g} h cycle the outlet carries about "
-                            f"{y_end * 1e6:.3g} ppmv (dew point {water_co2.dew_point_in_co2(y_end * 1e6, p) - 273.15:.0f} "
-                            f"degC): {d.id}'s front is wider than the bed, so its floor of "
-                            f"{y_out * 1e6:.3g} ppmv is not what this bed delivers.")
-    if velocity > v_limit:
-        warnings.append(f"Superficial velocity {velocity:.3g} m/s is above the {v_limit:.3g} m/s "
-                        "at which the bed's pressure gradient reaches 0.33 psi/ft (GPSA design "
-                        "value for downflow beds): use a wider vessel.")
-    if velocity < 0.05:
-        warnings.append("The gas moves slower than the 0.05 m/s the MTZ correlation was made for; "
-                        "its zone length is an extrapolation (probably on the long, safe side).")
-    drop = ergun_gradient(dp, eps, velocity, gas.density_kg_m3, gas.viscosity_pa_s) * length
-    if drop > MAX_BED_DROP_PA:
-        warnings.append(f"Bed pressure drop {drop / 1e3:.3g} kPa exceeds the 8 psi (55 kPa) design "
-                        "limit (Abdel-Aal et al. 2003): use a wider, shorter bed.")
-    if diameter < 10.0 * dp:
-        warnings.append("The vessel is less than ten particle diameters wide: gas will bypass "
-                        "along the wall; use smaller particles or a wider vessel.")
-    bed_volume = area * length
-    bed_mass = rho_b * bed_volume
-    # regeneration, cost
+def _regeneration(inp: DryerInput, job: Duty, bed: Bed) -> tuple[float | None, float | None, float, float]:
+    """Regeneration heat [J] and its energy cost, the desiccant charge's cost per cycle and the
+    drying cost per kg CO2 (step 6 of the method).
+
+    Q = (m_bed cp_desiccant + m_water cp_water) (T_regen - T_in) + m_water dH_ads; a charge lasts
+    ``service_life_cycles``. A desiccant that is not regenerated has no heat (``None``).
+    """
+    d = job.desiccant
     price = d.price_per_kg if inp.price_per_kg is None else inp.price_per_kg
     energy_price = (defaults()["regeneration_energy_price_per_kwh"] if inp.energy_price_per_kwh
                     is None else inp.energy_price_per_kwh)
+    bed_mass = d.bulk_density_kg_m3 * bed.area_m2 * bed.length_m
     if d.regenerable:
-        rise = d.regeneration_temperature_k - t_in
-        heat = (bed_mass * d.heat_capacity_j_kg_k + load * _CP_WATER) * rise \
-            + load * d.heat_of_adsorption_j_kg
+        rise = d.regeneration_temperature_k - job.temperature_k
+        heat = (bed_mass * d.heat_capacity_j_kg_k + job.load_kg * _CP_WATER) * rise \
+            + job.load_kg * d.heat_of_adsorption_j_kg
         energy_cost = heat / 3.6e6 * energy_price
     else:
         heat = energy_cost = None
     charge_cost = bed_mass * price / d.service_life_cycles
-    co2_per_cycle = m_co2 * cycle
-    cost = (charge_cost + (energy_cost or 0.0)) / co2_per_cycle
-    rh_in = y_in * 1e6 / water_co2.saturated_water_in_co2(t_in, p).water_ppmv
-    warnings.extend(_notes(d, rh_in))
+    cost = (charge_cost + (energy_cost or 0.0)) / (job.co2_flow_kg_s * job.cycle_s)
+    return heat, energy_cost, charge_cost, cost
+
+
+def _relative_humidity(job: Duty) -> float:
+    """The inlet's water as a share of what CO2 holds saturated at its temperature and pressure."""
+    return job.y_in * 1e6 / water_co2.saturated_water_in_co2(job.temperature_k, job.pressure_pa).water_ppmv
+
+
+def _result(job: Duty, bed: Bed, heat: float | None, energy_cost: float | None, charge_cost: float,
+            cost: float, warnings: list[str]) -> DryerResult:
+    """The :class:`DryerResult` of a duty and its bed."""
+    p, d = job.pressure_pa, job.desiccant
+    volume = bed.area_m2 * bed.length_m
     return DryerResult(
-        desiccant=d.id, co2_flow_kg_s=m_co2, inlet_water_ppmv=y_in * 1e6,
-        inlet_dew_point_k=water_co2.dew_point_in_co2(y_in * 1e6, p), inlet_relative_humidity=rh_in,
-        target_ppmv=target, target_dew_point_k=water_co2.dew_point_in_co2(y_t * 1e6, p), target_basis=basis,
-        water_in_kg_s=water_in, water_load_kg_per_cycle=load, equilibrium_loading_kg_per_kg=q_eq,
-        residual_loading_kg_per_kg=q_res, working_capacity_kg_per_kg=working,
-        saturated_length_m=l_sat, mtz_length_m=l_mtz, bed_length_m=length, bed_diameter_m=diameter,
-        bed_mass_kg=bed_mass, bed_volume_m3=bed_volume, gas_density_kg_m3=gas.density_kg_m3,
-        gas_viscosity_pa_s=gas.viscosity_pa_s, superficial_velocity_m_s=velocity,
-        velocity_limit_m_s=v_limit, pressure_drop_pa=drop, stoichiometric_time_s=t_s,
-        breakthrough_s=t_b, breakthrough_fraction=x_b, front_rate_per_s=k, outlet_ppmv=y_out * 1e6,
-        outlet_dew_point_k=water_co2.dew_point_in_co2(y_out * 1e6, p), reaches_target=reaches,
-        suggested_desiccant=suggestion, regeneration_heat_j=heat, regeneration_energy_cost=energy_cost,
+        desiccant=d.id, co2_flow_kg_s=job.co2_flow_kg_s, inlet_water_ppmv=job.y_in * 1e6,
+        inlet_dew_point_k=water_co2.dew_point_in_co2(job.y_in * 1e6, p),
+        inlet_relative_humidity=_relative_humidity(job),
+        target_ppmv=job.target_ppmv, target_dew_point_k=water_co2.dew_point_in_co2(job.y_target * 1e6, p),
+        target_basis=job.target_basis, water_in_kg_s=job.water_in_kg_s, water_load_kg_per_cycle=job.load_kg,
+        equilibrium_loading_kg_per_kg=job.q_eq, residual_loading_kg_per_kg=job.q_res,
+        working_capacity_kg_per_kg=job.working, saturated_length_m=bed.saturated_length_m,
+        mtz_length_m=bed.mtz_length_m, bed_length_m=bed.length_m, bed_diameter_m=bed.diameter_m,
+        bed_mass_kg=d.bulk_density_kg_m3 * volume, bed_volume_m3=volume,
+        gas_density_kg_m3=bed.gas_density_kg_m3, gas_viscosity_pa_s=bed.gas_viscosity_pa_s,
+        superficial_velocity_m_s=bed.velocity_m_s, velocity_limit_m_s=bed.velocity_limit_m_s,
+        pressure_drop_pa=bed.pressure_drop_pa, stoichiometric_time_s=bed.stoichiometric_time_s,
+        breakthrough_s=bed.breakthrough_s, breakthrough_fraction=bed.breakthrough_fraction,
+        front_rate_per_s=bed.front_rate_per_s, outlet_ppmv=job.y_out * 1e6,
+        outlet_dew_point_k=water_co2.dew_point_in_co2(job.y_out * 1e6, p), reaches_target=job.reaches,
+        suggested_desiccant=job.suggestion, regeneration_heat_j=heat, regeneration_energy_cost=energy_cost,
         desiccant_cost_per_cycle=charge_cost, cost_per_kg_co2=cost, warnings=tuple(warnings),
         cautions=_cautions(d, p),
     )
-
-
-def _front_shape(d: Desiccant, p_in: float, t_in: float, q_eq: float):
-    """Constant-pattern shape for desiccant ``d`` fed water at ``p_in`` [Pa] (fresh-bed basis)."""
-    if d.kind == "deliquescent":
-        return constant_pattern_shape(lambda x: 1.0)
-    return constant_pattern_shape(lambda x: equilibrium_loading(d, x * p_in, t_in) / q_eq)
 
 
 def _notes(d: Desiccant, rh_in: float) -> list[str]:
@@ -442,7 +276,7 @@ def breakthrough_curve(inp: DryerInput, result: DryerResult | None = None,
     r = result or size_dryer(inp)
     d = get_desiccant(r.desiccant)
     p = inp.inlet_pressure_pa
-    xs, kt = _front_shape(d, r.inlet_water_ppmv * 1e-6 * p, inp.inlet_temperature_k,
+    xs, kt = front_shape(d, r.inlet_water_ppmv * 1e-6 * p, inp.inlet_temperature_k,
                           r.equilibrium_loading_kg_per_kg)
     t_of = [r.stoichiometric_time_s + v / r.front_rate_per_s for v in kt]
     start = max(0.0, interpolate(1e-6, xs, t_of))
@@ -460,4 +294,5 @@ def breakthrough_curve(inp: DryerInput, result: DryerResult | None = None,
 
 
 __all__ = ["DryerInput", "DryerResult", "CurvePoint", "size_dryer", "breakthrough_curve",
-           "inlet_ppmv", "ISBT_WATER_PPMV", "DESICCANT_IDS"]
+           "inlet_ppmv", "ISBT_WATER_PPMV", "ISBT_SOURCE", "DESICCANT_IDS", "DESIGN_GRADIENT_PA_M",
+           "MAX_BED_DROP_PA"]

@@ -12,6 +12,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Mapping
 
+from co2routes.thermo.constants import R as _R, WATER_MOLAR_MASS
 from co2routes.thermo.errors import InputError, require_positive
 
 #: Species a composition may name: CoolProp fluid name and molar mass [kg/mol] (NIST WebBook).
@@ -20,12 +21,11 @@ SPECIES: dict[str, tuple[str, float]] = {
     "N2": ("Nitrogen", 0.0280134),
     "O2": ("Oxygen", 0.0319988),
     "Ar": ("Argon", 0.039948),
-    "H2O": ("Water", 0.018015),
+    "H2O": ("Water", WATER_MOLAR_MASS),
     "CH4": ("Methane", 0.0160425),
     "CO": ("CarbonMonoxide", 0.0280101),
     "H2": ("Hydrogen", 0.00201588),
 }
-_R = 8.314462618  # molar gas constant [J/(mol K)], CODATA 2018
 
 
 @dataclass(frozen=True, slots=True)
@@ -39,13 +39,16 @@ class GasState:
     compressibility: float
 
 
-def normalise(composition: Mapping[str, float]) -> dict[str, float]:
-    """Mole fractions that sum to 1, checked against :data:`SPECIES`.
+def normalise(composition: Mapping[str, float], known: Mapping[str, object] | None = SPECIES) -> dict[str, float]:
+    """Mole fractions that sum to 1, zero entries dropped; the names checked against ``known``
+    (:data:`SPECIES` by default, ``None``: any name).
 
     >>> normalise({"CO2": 3, "N2": 1})
     {'CO2': 0.75, 'N2': 0.25}
+    >>> normalise({"CO2": 2.0, "C2H5OH": 2.0, "N2": 0.0}, known=None)
+    {'CO2': 0.5, 'C2H5OH': 0.5}
     """
-    unknown = [k for k in composition if k not in SPECIES]
+    unknown = [k for k in composition if known is not None and k not in known]
     if unknown:
         raise InputError("gas", "may name only " + ", ".join(SPECIES), got=", ".join(unknown))
     if any(v < 0 for v in composition.values()) or sum(composition.values()) <= 0:

@@ -19,10 +19,9 @@ from __future__ import annotations
 
 import math
 
+from co2routes.thermo.constants import R
 from co2routes.thermo.errors import InputError, require_fraction
 
-#: Molar gas constant [J/(mol K)] (CODATA 2018).
-R = 8.314462618
 
 
 def _g(x: float) -> float:

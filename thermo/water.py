@@ -19,10 +19,9 @@ import math
 from dataclasses import dataclass
 
 from co2routes.thermo.co2 import ATMOSPHERE_PA, MOLAR_MASS as CO2_MOLAR_MASS
+from co2routes.thermo.constants import WATER_MOLAR_MASS
 from co2routes.thermo.errors import InputError, require_positive
 
-#: Molar mass of water [kg/mol] (IAPWS-95: 18.015268 g/mol, rounded).
-WATER_MOLAR_MASS = 0.018015
 #: Triple point of water [K] (IAPWS-95).
 WATER_TRIPLE_K = 273.16
 #: Vapour pressure of liquid water at its triple point [Pa] (IAPWS-95, Wagner & Pruss 2002:

@@ -233,10 +233,26 @@ def recipe_markdown(result, currency: str) -> str:
                           else f", running {rec['delivery']['time_h']:.1f} h."))
     per = "CO2" if product == "gas" else product.replace("-", " ")
     out += ["", "## Cost", "", f"Per kg {per}: {cell('', '{:.2f}', rec['cost_per_kg'])} {currency}.", ""]
-    out += [f"- {c['item']}: {c['amount']:.3f} {c['unit']} -> {cell('', '{:.2f}', c['cost'])}" for c in rec["costs"]]
+    out += [f"- {c['item']}: {c['amount']:.3f} {c['unit']} -> {cell('', '{:.2f}', c['cost'])}{price_note(c)}"
+            for c in rec["costs"]]
     out += ["", "## Cautions", ""] + [f"- {w}" for w in rec["warnings"]] + [f"- {c}" for c in rec["cautions"]]
     out.append(f"- {LOCAL_CODES}")
     return "\n".join(out) + "\n"
+
+
+def price_note(line: dict) -> str:
+    """Where a cost line's price came from, when it is not the price book.
+
+    >>> price_note({"price_key": "brine", "price_from": "none"})
+    " (no price for 'brine')"
+    >>> price_note({"price_key": "brine", "price_from": "route default"})
+    " (the route's default price for 'brine')"
+    """
+    if line.get("price_from") == "none" and line.get("price_key"):
+        return f" (no price for {line['price_key']!r})"
+    if line.get("price_from") == "route default":
+        return f" (the route's default price for {line['price_key']!r})"
+    return ""
 
 
 def recipe_csv(result, currency: str) -> str:

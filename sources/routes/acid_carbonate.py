@@ -28,6 +28,7 @@ from dataclasses import dataclass
 
 from co2routes.sources.base import (Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use)
 from co2routes.sources.common import temperature_change
+from co2routes.sources.model import RouteModel
 from co2routes.sources.routes._options import NamedDefaultOption, settings
 from co2routes.thermo import cautions
 from co2routes.thermo.errors import InputError
@@ -345,17 +346,5 @@ def _hazard(acid: str, strength: float, t_liquor_k: float) -> tuple[int, str]:
     return 1, f"{ACIDS[acid][0]} at {strength:.0%} is a mild acid; the gas still needs ventilation"
 
 
-@dataclass(frozen=True)
-class AcidCarbonateRoute:
-    """The route object registered under ``co2routes.sources`` as ``acid-carbonate``."""
-
-    id: str = "acid-carbonate"
-    label: str = "Acid on a carbonate"
-    options: tuple[Option, ...] = OPTIONS
-
-    def compute(self, request: RouteRequest) -> RouteResult:
-        """Plan one batch for ``request``."""
-        return compute(request)
-
-
-ROUTE = AcidCarbonateRoute()
+#: The route registered under ``co2routes.sources`` as ``acid-carbonate``.
+ROUTE = RouteModel("acid-carbonate", "Acid on a carbonate", OPTIONS, compute)

@@ -10,10 +10,10 @@ do not suffice, the route says so and counts the hours it would take.
 
 from __future__ import annotations
 
-from co2routes.sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
+from co2routes.sources.base import Byproduct, Option, RouteRequest, RouteResult
 from co2routes.sources.routes.shared import R, kwh, percent, saturated
-from co2routes.sources.routes.sorbent_calcination import (BED_OPTIONS, KILN_HOURS, M_H2O, RELEASE_OPTIONS, kiln_gas,
-                                                load_bed, release, release_notes, spent_lime)
+from co2routes.sources.routes.sorbent_calcination import (BED_OPTIONS, M_H2O, RELEASE_OPTIONS, kiln_result,
+                                                load_bed, release)
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
 
@@ -130,7 +130,6 @@ class BreathRoute:
                         f"{water_out * M_H2O / request.co2_kg:.2f} kg of water per kg CO2, of which "
                         f"{line_condensate / request.co2_kg:.2f} kg condenses in the collector line: drain it.")
         warnings.extend(rel.warnings)
-        raw, kiln_condensate = kiln_gas(rel, co2_mol, site)
         fan_kwh = kwh(bed.fan_j)
         rate_kg_day = per_person * M_CO2 * DAY_S
         notes = (
@@ -138,31 +137,12 @@ class BreathRoute:
             f"(Persily & de Jonge 2017); exhaled air {percent(breath['CO2'])} CO2, {percent(breath['H2O'])} water.",
             f"Gas through the bed {bed.gas_m3 / request.co2_kg:.1f} m3 per kg CO2, pressure drop "
             f"{bed.pressure_drop_pa:.0f} Pa, fan {fan_kwh / request.co2_kg:.4f} kWh per kg CO2.",
-        ) + release_notes(rel, request.co2_kg)
-        energy = Energy(rel.energy.electricity_kwh + fan_kwh, rel.energy.fuel_kwh, rel.energy.heat_kwh)
-        hazard = 3 if opt["kiln_heat"] == "natural-gas" else 2
-        byproducts = [Byproduct("breath condensate", "H2O", line_condensate, "drained from the collector line")]
-        if kiln_condensate > 0:
-            byproducts.append(Byproduct("kiln condensate", "H2O", kiln_condensate, "clean water from the kiln gas"))
-        byproducts.append(spent_lime(rel, int(opt["cycles"])))
-        return RouteResult(
-            co2_kg=request.co2_kg,
-            co2_generated_kg=exhaled_mol * M_CO2,
-            reagents=rel.reagents, byproducts=tuple(byproducts),
-            uses=rel.uses + (Use("electricity for the fan", fan_kwh, "energy_kwh", "electricity"),),
-            raw_gas=RawGas(raw, site.temperature_k, site.pressure_pa),
-            heat_kj=rel.kiln_heat_j / 1000.0,
-            temperature_change_k=None,
-            energy=energy,
-            time_h=max(needed_s, 0.0) / 3600.0 + KILN_HOURS,
-            hazard=hazard,
-            hazard_reason="kiln near 900 degC and caustic lime; CO2 builds up where people gather"
-                          + ("; a gas-fired kiln also makes carbon monoxide" if hazard == 3 else ""),
-            warnings=tuple(warnings),
-            cautions=(cautions.BREATH, cautions.HOT_SURFACE, cautions.LIME_DUST, cautions.ASPHYXIATION)
-            + ((cautions.BURNER,) if hazard == 3 else ()),
-            notes=notes,
         )
+        condensate = Byproduct("breath condensate", "H2O", line_condensate, "drained from the collector line")
+        return kiln_result(request, rel, bed, max(needed_s, 0.0), co2_generated_kg=exhaled_mol * M_CO2,
+                           byproducts=(condensate,), first_cautions=(cautions.BREATH,),
+                           hazard_reason="kiln near 900 degC and caustic lime; CO2 builds up where people gather",
+                           warnings=warnings, notes=notes)
 
 
 ROUTE = BreathRoute()

@@ -13,10 +13,11 @@ credit at the price book's ``heat`` price.
 from __future__ import annotations
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
-from co2routes.sources.common import normalised
 from co2routes.sources.routes.shared import YES_NO, kwh, percent, saturated
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
+from co2routes.thermo.constants import WATER_MOLAR_MASS
+from co2routes.thermo.gasmix import normalise
 
 #: Price-book key, display name and formula of each fuel bought by mass.
 _BOUGHT = {"propane": ("propane", "propane (LPG)"), "butane": ("butane", "butane (LPG)"),
@@ -93,8 +94,8 @@ class CombustionRoute:
         if capture:
             raw = saturated({"CO2": 1.0}, site.temperature_k, site.pressure_pa)
         else:
-            raw = normalised({k: v for k, v in cooled.items() if v > 1e-9})
-        condensate_kg = fuel_mol * c.condensate_mol * 0.0180153
+            raw = normalise({k: v for k, v in cooled.items() if v > 1e-9}, known=None)
+        condensate_kg = fuel_mol * c.condensate_mol * WATER_MOLAR_MASS
         warnings = _warnings(c, capture, y_flue, opt)
         notes = (
             f"Flue gas (dry): {', '.join(f'{k} {percent(v)}' for k, v in sorted(c.dry_fractions().items(), key=lambda kv: -kv[1]) if v > 1e-4)}.",

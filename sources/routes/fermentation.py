@@ -31,6 +31,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Use
+from co2routes.sources.model import RouteModel
 from co2routes.sources.routes._options import NamedDefaultOption, settings
 from co2routes.sources.routes.shared import YES_NO
 from co2routes.thermo import cautions
@@ -216,17 +217,5 @@ def _recovery_note(batch: Batch, opt: dict, molar_mass: float, generated_kg: flo
             "is recovered.")
 
 
-@dataclass(frozen=True)
-class FermentationRoute:
-    """The route object registered under ``co2routes.sources`` as ``fermentation``."""
-
-    id: str = "fermentation"
-    label: str = "Sugar fermentation"
-    options: tuple[Option, ...] = OPTIONS
-
-    def compute(self, request: RouteRequest) -> RouteResult:
-        """Plan one batch for ``request``."""
-        return compute(request)
-
-
-ROUTE = FermentationRoute()
+#: The route registered under ``co2routes.sources`` as ``fermentation``.
+ROUTE = RouteModel("fermentation", "Sugar fermentation", OPTIONS, compute)

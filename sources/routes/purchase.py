@@ -12,9 +12,8 @@ insulated transport box (common practice; a good chest loses 5-10 % a day, a car
 
 from __future__ import annotations
 
-from dataclasses import dataclass
-
 from co2routes.sources.base import Energy, Option, RawGas, Reagent, RouteRequest, RouteResult
+from co2routes.sources.model import RouteModel
 from co2routes.sources.routes._options import settings
 from co2routes.thermo import cautions
 from co2routes.thermo.errors import InputError
@@ -84,17 +83,5 @@ def compute(request: RouteRequest) -> RouteResult:
         delivers=delivers)
 
 
-@dataclass(frozen=True)
-class PurchaseRoute:
-    """The route object registered under ``co2routes.sources`` as ``purchase``."""
-
-    id: str = "purchase"
-    label: str = "Buy CO2"
-    options: tuple[Option, ...] = OPTIONS
-
-    def compute(self, request: RouteRequest) -> RouteResult:
-        """Plan one purchase for ``request``."""
-        return compute(request)
-
-
-ROUTE = PurchaseRoute()
+#: The route registered under ``co2routes.sources`` as ``purchase``.
+ROUTE = RouteModel("purchase", "Buy CO2", OPTIONS, compute)

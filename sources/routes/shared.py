@@ -4,12 +4,11 @@ from __future__ import annotations
 
 from typing import Mapping
 
-from co2routes.sources.common import normalised
+from co2routes.thermo.constants import R  # noqa: F401 - the routes take R from here
+from co2routes.thermo.gasmix import normalise
 
 #: Joules in a kilowatt-hour.
 J_PER_KWH = 3.6e6
-#: Molar gas constant [J/(mol K)] (CODATA 2018).
-R = 8.314462618
 
 #: Choices of a yes/no option.
 YES_NO = ("yes", "no")
@@ -28,7 +27,7 @@ def saturated(dry: Mapping[str, float], temperature_k: float, pressure_pa: float
     from co2routes.thermo.water import vapor_pressure
 
     x_w = vapor_pressure(temperature_k) / pressure_pa
-    dry_n = normalised({k: v for k, v in dry.items() if k != "H2O"})
+    dry_n = normalise({k: v for k, v in dry.items() if k != "H2O"}, known=None)
     out = {k: v * (1.0 - x_w) for k, v in dry_n.items() if v * (1.0 - x_w) > 1e-9}
     out["H2O"] = x_w
     return out

@@ -17,6 +17,7 @@ from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, R
 from co2routes.sources.routes.shared import R, kwh, percent, saturated
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
+from co2routes.thermo.constants import WATER_MOLAR_MASS as M_H2O
 
 #: Sorbent choice -> (species, name as bought, price key, bulk density [kg/m3]). Bulk densities of
 #: granular hydrated lime about 500 and of pebble quicklime about 900 kg/m3 (from memory).
@@ -28,8 +29,6 @@ SORBENTS = {
 VOIDAGE = 0.40
 #: Hours a small kiln takes to heat, calcine and cool one charge (common practice).
 KILN_HOURS = 2.0
-#: Molar mass of water [kg/mol] (IUPAC standard atomic weights).
-M_H2O = 0.0180153
 
 #: Options of the release step, shared with the breath route.
 RELEASE_OPTIONS = (
@@ -206,6 +205,39 @@ def release_notes(rel: Release, co2_kg: float) -> tuple[str, ...]:
     )
 
 
+def kiln_result(request: RouteRequest, rel: Release, bed, load_s: float, *, co2_generated_kg: float,
+                byproducts: tuple[Byproduct, ...], hazard_reason: str, first_cautions: tuple[str, ...],
+                warnings: list[str], notes: tuple[str, ...]) -> RouteResult:
+    """The result of a route whose CO2 comes off a lime bed in the kiln (this route and breath).
+
+    Adds to what the route worked out: the kiln's reagents, uses and energy, the bed fan's
+    electricity, the kiln gas cooled to the site, its condensate and the spent lime, the kiln's
+    hazard and cautions, and :func:`release_notes`. ``load_s`` is the time to load the bed [s].
+    """
+    opt, site = request.options, request.site
+    fan_kwh = kwh(bed.fan_j)
+    raw, condensate = kiln_gas(rel, request.co2_kg / M_CO2, site)
+    kiln = (Byproduct("kiln condensate", "H2O", condensate, "clean water from the kiln gas"),) if condensate > 0 else ()
+    hazard = 3 if opt["kiln_heat"] == "natural-gas" else 2
+    return RouteResult(
+        co2_kg=request.co2_kg, co2_generated_kg=co2_generated_kg,
+        reagents=rel.reagents,
+        byproducts=byproducts + kiln + (spent_lime(rel, int(opt["cycles"])),),
+        uses=rel.uses + (Use("electricity for the fan", fan_kwh, "energy_kwh", "electricity"),),
+        raw_gas=RawGas(raw, site.temperature_k, site.pressure_pa),
+        heat_kj=rel.kiln_heat_j / 1000.0,
+        temperature_change_k=None,
+        energy=Energy(rel.energy.electricity_kwh + fan_kwh, rel.energy.fuel_kwh, rel.energy.heat_kwh),
+        time_h=load_s / 3600.0 + KILN_HOURS,
+        hazard=hazard,
+        hazard_reason=hazard_reason + ("; a gas-fired kiln also makes carbon monoxide" if hazard == 3 else ""),
+        warnings=tuple(warnings),
+        cautions=first_cautions + (cautions.HOT_SURFACE, cautions.LIME_DUST, cautions.ASPHYXIATION)
+        + ((cautions.BURNER,) if hazard == 3 else ()),
+        notes=notes + release_notes(rel, request.co2_kg),
+    )
+
+
 class SorbentCalcinationRoute:
     """Lime loaded from air in a fan-blown bed, calcined in a kiln, slaked and reused."""
 
@@ -223,7 +255,6 @@ class SorbentCalcinationRoute:
         fan_kwh = kwh(bed.fan_j)
         uptake_s = float(opt["uptake_time"])
         load_s = max(bed.supply_s, uptake_s)
-        raw, condensate = kiln_gas(rel, co2_mol, site)
         warnings = list(rel.warnings)
         if bed.supply_s > uptake_s:
             warnings.append(f"The fan needs {bed.supply_s / 86400:.1f} days to pass enough air through the bed, "
@@ -233,28 +264,10 @@ class SorbentCalcinationRoute:
             f"{site.air_co2_fraction * 1e6:.0f} ppm, {percent(float(opt['capture_fraction']))} taken up; bed "
             f"{bed.bed_kg:.1f} kg over {bed.bed_area_m2:.2f} m2, pressure drop {bed.pressure_drop_pa:.0f} Pa, "
             f"fan {fan_kwh / request.co2_kg:.3f} kWh per kg CO2.",
-        ) + release_notes(rel, request.co2_kg)
-        energy = Energy(rel.energy.electricity_kwh + fan_kwh, rel.energy.fuel_kwh, rel.energy.heat_kwh)
-        hazard = 3 if opt["kiln_heat"] == "natural-gas" else 2
-        return RouteResult(
-            co2_kg=request.co2_kg, co2_generated_kg=request.co2_kg,
-            reagents=rel.reagents,
-            byproducts=((Byproduct("kiln condensate", "H2O", condensate, "clean water from the kiln gas"),)
-                        if condensate > 0 else ()) + (spent_lime(rel, int(opt["cycles"])),),
-            uses=rel.uses + (Use("electricity for the fan", fan_kwh, "energy_kwh", "electricity"),),
-            raw_gas=RawGas(raw, site.temperature_k, site.pressure_pa),
-            heat_kj=rel.kiln_heat_j / 1000.0,
-            temperature_change_k=None,
-            energy=energy,
-            time_h=load_s / 3600.0 + KILN_HOURS,
-            hazard=hazard,
-            hazard_reason="kiln near 900 degC and caustic lime dust"
-                          + ("; a gas-fired kiln also makes carbon monoxide" if hazard == 3 else ""),
-            warnings=tuple(warnings),
-            cautions=(cautions.HOT_SURFACE, cautions.LIME_DUST, cautions.ASPHYXIATION)
-            + ((cautions.BURNER,) if hazard == 3 else ()),
-            notes=notes,
         )
+        return kiln_result(request, rel, bed, load_s, co2_generated_kg=request.co2_kg, byproducts=(),
+                           hazard_reason="kiln near 900 degC and caustic lime dust", first_cautions=(),
+                           warnings=warnings, notes=notes)
 
 
 ROUTE = SorbentCalcinationRoute()

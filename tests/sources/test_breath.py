@@ -39,7 +39,7 @@ def test_persily_formula_by_hand():
 
 
 def test_exhaled_air_water_load():
-    # IAPWS-95: p_sat(34 degC) = 5.32 kPa, so exhaled air holds about 5.3 % water (REFERENCES:
+    # IAPWS-95: p_sat(34 degC) = 5.32 kPa, so exhaled air holds about 5.3 % water (docs/references.md:
     # 5-6 %); tol 0.2 percentage points
     x = exhaled_air(0.85, air_fractions(425e-6), 101325.0)
     assert x["H2O"] == pytest.approx(0.0525, abs=0.002)

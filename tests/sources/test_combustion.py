@@ -46,7 +46,7 @@ def test_stoichiometric_methane_flue_without_capture():
 
 
 def test_heat_sign_and_credit():
-    # Sign convention (DESIGN.md): the batch gives heat off, heat_kj strongly negative; the
+    # Sign convention (DEVELOPERS.md): the batch gives heat off, heat_kj strongly negative; the
     # credit is a negative use at the heat price
     r = run(heat_used="yes")
     assert r.heat_kj < -10000.0

@@ -30,7 +30,7 @@ def test_calcination_heat_against_nbs():
 
 
 def test_heat_sign():
-    # The kiln takes heat in: heat_kj positive (DESIGN.md sign convention)
+    # The kiln takes heat in: heat_kj positive (heat-sign convention, DEVELOPERS.md)
     assert run().heat_kj > 0
 
 

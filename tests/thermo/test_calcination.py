@@ -37,7 +37,7 @@ def test_pressure_against_baker(t, rel):
 
 
 def test_references_sheet_form_of_baker():
-    # REFERENCES.md: log10 p[atm] = 7.0816 - 8305/T, the same fit; 1 atm near 1173 K.
+    # docs/references.md: log10 p[atm] = 7.0816 - 8305/T, the same fit; 1 atm near 1173 K.
     t = 8305 / 7.0816
     assert calcination.co2_pressure_over_calcite(t).co2_pressure_pa / ATM == pytest.approx(1.0,
                                                                                             rel=0.12)

@@ -74,7 +74,7 @@ def test_saturation_at_0_c_brief_values():
 
 
 def test_saturation_at_25_c():
-    # REFERENCES.md: 25 degC 64.34 bar (Span & Wagner via NIST WebBook 6.4342 MPa, from memory);
+    # docs/references.md: 25 degC 64.34 bar (Span & Wagner via NIST WebBook 6.4342 MPa, from memory);
     # saturated liquid ~710 kg/m3 (brief); 1e-4 MPa and 1 kg/m3
     s = co2.saturation_at_temperature(298.15)
     assert s.pressure_pa / 1e6 == pytest.approx(6.4342, abs=1e-4)

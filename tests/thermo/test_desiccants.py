@@ -115,7 +115,7 @@ def test_every_listed_desiccant_loads_with_a_source_and_a_price():
 
 
 def test_sieve_reaches_a_lower_dew_point_than_silica_gel():
-    # REFERENCES (from memory): silica gel -50 to -60 degC, molecular sieves -75 to -100 degC.
+    # docs/references.md (from memory): silica gel -50 to -60 degC, molecular sieves -75 to -100 degC.
     sg, a3 = get_desiccant("silica-gel"), get_desiccant("molecular-sieve-3a")
     assert outlet_limit(a3, 298.15)[0] < outlet_limit(sg, 298.15)[0]
     # -50 degC frost point is 3.94 Pa (Murphy & Koop 2005 eq. 7), within 0.5 %

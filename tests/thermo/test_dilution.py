@@ -45,7 +45,7 @@ def test_h2so4_infinite_dilution_end_point():
 
 
 def test_commercial_hydrochloric_acid():
-    # 31 % w/w acid is HCl . 4.5 H2O (REFERENCES.md). Koretsky's table interpolated at n = 4.5
+    # 31 % w/w acid is HCl . 4.5 H2O (docs/references.md). Koretsky's table interpolated at n = 4.5
     # gives 12.6 kJ/mol to infinite dilution; 0.6 kJ/mol tolerance.
     d = dilution.hcl_dilution_enthalpy(0.31)
     assert d.n_initial == pytest.approx(4.5, abs=0.01)

@@ -19,12 +19,12 @@ BASE = DryerInput(co2_flow_kg_s=2.0 / DAY, inlet_temperature_k=298.15,
 
 def test_default_target_is_the_isbt_limit():
     r = size_dryer(BASE)
-    # ISBT quality guidelines: water at most 20 ppm v/v in beverage-grade CO2 (REFERENCES, R)
+    # ISBT quality guidelines: water at most 20 ppm v/v in beverage-grade CO2 (docs/references.md, R)
     assert r.target_ppmv == ISBT_WATER_PPMV == 20.0
     assert "ISBT" in r.target_basis
-    # 20 ppmv at 1 atm is a frost point of -55.3 degC with ideal mixing (REFERENCES, C; Murphy &
-    # Koop 2005); CO2's enhancement at 1 atm (Spycher et al. 2003, about 1-2 %) lowers it by about
-    # 0.1 K; 0.2 K.
+    # 20 ppmv at 1 atm is a frost point of -55.3 degC with ideal mixing (docs/references.md, C;
+    # Murphy & Koop 2005); CO2's enhancement at 1 atm (Spycher et al. 2003, about 1-2 %) lowers it
+    # by about 0.1 K; 0.2 K.
     assert r.target_dew_point_k - 273.15 == pytest.approx(-55.3, abs=0.2)
 
 
@@ -104,7 +104,7 @@ def test_drier_target_gives_a_larger_bed_or_a_warning():
 
 
 def test_3a_reaches_a_lower_dew_point_than_silica_gel():
-    # REFERENCES (from memory): silica gel -50 to -60 degC; molecular sieves -75 to -100 degC
+    # docs/references.md (from memory): silica gel -50 to -60 degC; molecular sieves -75 to -100 degC
     a3 = size_dryer(BASE)
     sg = size_dryer(dataclasses.replace(BASE, desiccant="silica-gel"))
     assert a3.outlet_dew_point_k < sg.outlet_dew_point_k

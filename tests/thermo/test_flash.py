@@ -17,7 +17,7 @@ def test_sublimation_enthalpy_per_kg():
 
 @pytest.mark.parametrize(
     "t_c, x_ref",
-    # REFERENCES.md (status C): -40 degC 0.54, -20 degC 0.47, 0 degC 0.39, +20 degC 0.29,
+    # docs/references.md (status C): -40 degC 0.54, -20 degC 0.47, 0 degC 0.39, +20 degC 0.29,
     # +30 degC 0.21 (two decimals): tolerance 0.006
     [(-40.0, 0.54), (-20.0, 0.47), (0.0, 0.39), (20.0, 0.29), (30.0, 0.21)],
 )

@@ -32,7 +32,7 @@ H2O, CO2 = "7732-18-5", "124-38-9"
 
 
 def test_bicarbonate_and_hydrochloric_acid():
-    # REFERENCES.md: +31.4 kJ/mol from NBS values. Independent sum from CRC data (chemicals):
+    # docs/references.md: +31.4 kJ/mol from NBS values. Independent sum from CRC data (chemicals):
     ref = crc_hf(ions=[(1, "Na+"), (1, "Cl-")], liquids=[(1, H2O)], gases=[(1, CO2)]) - crc_hf(
         solids=[(1, "144-55-8")], ions=[(1, "H+"), (1, "Cl-")])
     r = reaction_enthalpy(NAHCO3_HCL)
@@ -43,7 +43,7 @@ def test_bicarbonate_and_hydrochloric_acid():
 
 
 def test_soda_ash_and_hydrochloric_acid():
-    # REFERENCES.md -28.9 kJ/mol (NBS); CRC sum within 0.5 (NASA Na2CO3 -1130.79 vs CRC -1130.7).
+    # docs/references.md -28.9 kJ/mol (NBS); CRC sum within 0.5 (NASA Na2CO3 -1130.79 vs CRC -1130.7).
     ref = crc_hf(ions=[(2, "Na+"), (2, "Cl-")], liquids=[(1, H2O)], gases=[(1, CO2)]) - crc_hf(
         solids=[(1, "497-19-8")], ions=[(2, "H+"), (2, "Cl-")])
     r = reaction_enthalpy("Na2CO3(s) + 2 HCl(aq) -> 2 NaCl(aq) + H2O(l) + CO2(g)")
@@ -52,7 +52,7 @@ def test_soda_ash_and_hydrochloric_acid():
 
 
 def test_limestone_and_hydrochloric_acid():
-    # REFERENCES.md -15.3 kJ/mol (NBS). The CRC calcite row (-1207.6) is 0.7 kJ/mol below
+    # docs/references.md -15.3 kJ/mol (NBS). The CRC calcite row (-1207.6) is 0.7 kJ/mol below
     # NBS/NASA, so the CRC sum is checked within 1.0 kJ/mol.
     ref = crc_hf(ions=[(1, "Ca+2"), (2, "Cl-")], liquids=[(1, H2O)], gases=[(1, CO2)]) - crc_hf(
         solids=[(1, "471-34-1")], ions=[(2, "H+"), (2, "Cl-")])
@@ -62,7 +62,7 @@ def test_limestone_and_hydrochloric_acid():
 
 
 def test_fermentation_of_glucose():
-    # REFERENCES.md -69.1 kJ/mol (NBS); CRC (glucose -1273.3, ethanol(l) via chemicals).
+    # docs/references.md -69.1 kJ/mol (NBS); CRC (glucose -1273.3, ethanol(l) via chemicals).
     ref = crc_hf(liquids=[(2, "64-17-5")], gases=[(2, CO2)]) - crc_hf(solids=[(1, "26655-34-5")])
     r = reaction_enthalpy("C6H12O6(s) -> 2 C2H5OH(l) + 2 CO2(g)")
     assert r.delta_h_kj_per_mol == pytest.approx(-69.1, abs=0.2)
@@ -74,18 +74,18 @@ def test_fermentation_of_glucose():
 
 
 def test_calcination_and_carbonation():
-    # NBS: +178.3 kJ/mol (REFERENCES.md); CRC sum (CaO -634.9, calcite -1207.6) within 1.0.
+    # NBS: +178.3 kJ/mol (docs/references.md); CRC sum (CaO -634.9, calcite -1207.6) within 1.0.
     ref = crc_hf(solids=[(1, "1305-78-8")], gases=[(1, CO2)]) - crc_hf(solids=[(1, "471-34-1")])
     r = reaction_enthalpy("CaCO3(s) -> CaO(s) + CO2(g)")
     assert r.delta_h_kj_per_mol == pytest.approx(178.3, abs=0.1)
     assert r.delta_h_kj_per_mol == pytest.approx(ref, abs=1.0)
-    # REFERENCES.md -113.2 kJ/mol for carbonation of slaked lime (NBS).
+    # docs/references.md -113.2 kJ/mol for carbonation of slaked lime (NBS).
     c = reaction_enthalpy("Ca(OH)2(s) + CO2(g) -> CaCO3(s) + H2O(l)")
     assert c.delta_h_kj_per_mol == pytest.approx(-113.2, abs=0.2)
 
 
 def test_other_route_reactions_against_references_sheet():
-    # REFERENCES.md (C, from NBS values): +62.7, +31.1, about +123 kJ/mol.
+    # docs/references.md (C, from NBS values): +62.7, +31.1, about +123 kJ/mol.
     assert reaction_enthalpy("2 NaHCO3(s) + H2SO4(aq) -> Na2SO4(aq) + 2 H2O(l) + 2 CO2(g)"
                              ).delta_h_kj_per_mol == pytest.approx(62.7, abs=0.2)
     assert reaction_enthalpy("NaHCO3(s) + CH3COOH(aq) -> CH3COONa(aq) + H2O(l) + CO2(g)"

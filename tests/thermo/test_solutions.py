@@ -38,14 +38,14 @@ def test_interpolated_points_against_laliberte(key, lal_name, w):
 
 
 def test_hcl_rows_from_ict():
-    # International Critical Tables via Perry's (REFERENCES.md, read): 20 degC, g/cm3.
+    # International Critical Tables via Perry's (docs/references.md, read): 20 degC, g/cm3.
     for w, rho in [(0.10, 1.048), (0.20, 1.098), (0.30, 1.149), (0.32, 1.159), (0.36, 1.179),
                    (0.38, 1.189)]:
         assert solutions.hcl_density(w) / 1000 == pytest.approx(rho, abs=0.0006)
 
 
 def test_citric_acid_rows():
-    # CRC (REFERENCES.md, read): 10 % 1.0402, 30 % 1.1346 g/cm3 at 20 degC.
+    # CRC (docs/references.md, read): 10 % 1.0402, 30 % 1.1346 g/cm3 at 20 degC.
     assert solutions.solution_density("citric acid", 0.10) == pytest.approx(1040.2, abs=0.05)
     assert solutions.solution_density("C6H8O7", 0.30) == pytest.approx(1134.6, abs=0.05)
 

@@ -82,7 +82,7 @@ def test_aqueous_salts_are_sums_of_crc_ions(name, ions):
 
 
 def test_dissolved_co2_and_bicarbonate_route_values():
-    # REFERENCES.md (CODATA/NBS, read): CO2(aq) -413.80; NBS acetic acid(aq) -485.76 kJ/mol.
+    # docs/references.md (CODATA/NBS, read): CO2(aq) -413.80; NBS acetic acid(aq) -485.76 kJ/mol.
     assert kj("CO2(aq)") == pytest.approx(-413.80, abs=0.01)
     assert kj("CH3COOH(aq)") == pytest.approx(-485.76, abs=0.01)
     # CRC ion table: citrate is absent, so trisodium citrate is checked on its sodium part only:

@@ -83,7 +83,7 @@ def test_vapor_pressure_refuses_out_of_range(bad):
 # --- dew and frost points -------------------------------------------------------------------------
 
 def test_frost_point_of_20_ppmv_at_1_atm():
-    # REFERENCES.md (C): 20 ppmv at 1 atm has a frost point of about -55.3 degC. Independent
+    # docs/references.md (C): 20 ppmv at 1 atm has a frost point of about -55.3 degC. Independent
     # route: invert the IAPWS 2011 sublimation equation (chemicals) with scipy; 0.05 K.
     from chemicals.iapws import iapws11_Psub
     from scipy.optimize import brentq

@@ -10,11 +10,11 @@ from __future__ import annotations
 
 import csv
 import io
-import json
 import math
 
 import pytest
 
+from clihelp import run_json
 from co2routes.tui.cli import main
 
 NIST_P_SAT_0C = 3.4851e6  # Pa, NIST WebBook CO2 saturation at 273.15 K
@@ -32,13 +32,6 @@ def fair(tmp_path_factory):
     path = tmp_path_factory.mktemp("fair") / "fair.toml"
     assert main(["demo", "--which", "science-fair", str(path)]) == 0
     return str(path)
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    captured = capsys.readouterr()
-    assert code == 0, captured.err
-    return json.loads(captured.out)
 
 
 def run_text(capsys, *argv):

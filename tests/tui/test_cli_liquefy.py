@@ -7,21 +7,13 @@ practice: receiver at 0 degC about 35 bar against about 64 bar at room temperatu
 
 from __future__ import annotations
 
-import json
-
 import pytest
 
 from co2routes.thermo import cautions
+from clihelp import run_json
 from co2routes.tui.cli import COMMANDS, main
 
 BASE = ["liquefy", "--inlet-pressure", "1 atm", "--inlet-temperature", "25 degC"]
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    captured = capsys.readouterr()
-    assert code == 0, captured.err
-    return json.loads(captured.out)
 
 
 def test_registered():

@@ -2,20 +2,12 @@
 
 from __future__ import annotations
 
-import json
-
 import pytest
 
+from clihelp import run_json
 from co2routes.tui.cli import main
 
 NAHCO3_HCL = "NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)"
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    out = capsys.readouterr().out
-    assert code == 0
-    return json.loads(out)
 
 
 def test_reaction_json(capsys):
@@ -23,7 +15,7 @@ def test_reaction_json(capsys):
     assert set(answer) >= {"equation", "temperature_k", "delta_h_kj_per_mol",
                            "delta_h_kj_per_kg_co2", "balanced", "heat_in_words", "warnings",
                            "cautions"}
-    # NBS (Wagman 1982) values, REFERENCES.md: +31.4 kJ/mol, endothermic.
+    # NBS (Wagman 1982) values, docs/references.md: +31.4 kJ/mol, endothermic.
     assert answer["delta_h_kj_per_mol"] == pytest.approx(31.4, abs=0.1)
     assert answer["delta_h_kj_per_kg_co2"] == pytest.approx(31.36 / 0.044009, rel=2e-3)
     assert answer["temperature_k"] == pytest.approx(298.15)

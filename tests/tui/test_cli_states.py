@@ -2,19 +2,11 @@
 
 from __future__ import annotations
 
-import json
-
 import pytest
 
 from co2routes.thermo import cautions
+from clihelp import run_json
 from co2routes.tui.cli import COMMANDS, main
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    out = capsys.readouterr().out
-    assert code == 0
-    return json.loads(out)
 
 
 def test_verbs_are_registered():
@@ -120,7 +112,7 @@ def test_store_bad_input(capsys, argv, option):
 # --- snow -------------------------------------------------------------------------------------------
 
 def test_snow_with_mass(capsys):
-    # REFERENCES.md (C): +20 degC liquid gives 0.29 dry ice; 0.006
+    # docs/references.md (C): +20 degC liquid gives 0.29 dry ice; 0.006
     answer = run_json(capsys, "snow", "--liquid-temperature", "20 degC", "--liquid-mass", "10 kg")
     assert answer["solid_fraction"] == pytest.approx(0.29, abs=0.006)
     assert answer["solid_mass_kg"] + answer["vapor_mass_kg"] == pytest.approx(10.0)
@@ -129,7 +121,7 @@ def test_snow_with_mass(capsys):
 
 
 def test_snow_by_pressure_without_mass(capsys):
-    # REFERENCES.md (C): 0 degC liquid (34.85 bar) gives 0.39; masses unknown without a mass
+    # docs/references.md (C): 0 degC liquid (34.85 bar) gives 0.39; masses unknown without a mass
     answer = run_json(capsys, "snow", "--liquid-pressure", "34.85 bar")
     assert answer["liquid_temperature_k"] == pytest.approx(273.15, abs=0.02)
     assert answer["solid_fraction"] == pytest.approx(0.39, abs=0.006)
@@ -155,7 +147,7 @@ def test_snow_bad_input(capsys, argv, option):
 # --- moisture ---------------------------------------------------------------------------------------
 
 def test_moisture_from_frost_point(capsys):
-    # REFERENCES.md: 20 ppmv at 1 atm has a frost point of about -55.3 degC; 0.5 ppmv
+    # docs/references.md: 20 ppmv at 1 atm has a frost point of about -55.3 degC; 0.5 ppmv
     answer = run_json(capsys, "moisture", "--dew-point=-55.3 degC")
     assert answer["water_ppmv"] == pytest.approx(20.0, abs=0.5)
     assert answer["frost_point"] is True

@@ -8,19 +8,11 @@ sublimation; hand calculations named beside each assert.
 
 from __future__ import annotations
 
-import json
-
 import pytest
 
 from co2routes.thermo import cautions
+from clihelp import run_json
 from co2routes.tui.cli import main
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    captured = capsys.readouterr()
-    assert code == 0, captured.err
-    return json.loads(captured.out)
 
 
 def fails(capsys, *argv):

@@ -9,7 +9,6 @@ with exit status 2, the progress bar only on a terminal.
 from __future__ import annotations
 
 import io
-import json
 import sys
 from pathlib import Path
 
@@ -20,6 +19,7 @@ sys.path.insert(0, str(Path(__file__).resolve().parents[1] / "sources"))
 from whatif_fakes import FakeRoute  # noqa: E402
 
 from co2routes.sources import registry, sensitivity, uncertainty  # noqa: E402
+from clihelp import run_cli as run_json  # noqa: E402
 from co2routes.tui.cli import COMMANDS, main  # noqa: E402
 from co2routes.tui.commands.uncertainty import ProgressBar  # noqa: E402
 
@@ -49,13 +49,6 @@ def write(tmp_path, text=SCENARIO):
     path = tmp_path / "s.toml"
     path.write_text(text, encoding="utf-8")
     return str(path)
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    captured = capsys.readouterr()
-    assert code == 0, captured.err
-    return json.loads(captured.out), captured.err
 
 
 def test_registered():

@@ -1,4 +1,4 @@
-"""Small helpers shared by the CO2-state verbs (``saturation``, ``store``, ``snow``, ``moisture``).
+"""Small helpers shared by the verbs (``saturation``, ``store``, ``snow``, ``moisture``, ``calcination`` ...).
 
 Not a verb: it is not listed in ``co2routes.tui.cli.COMMANDS``.
 """
@@ -31,3 +31,31 @@ def for_option(option: str) -> Iterator[None]:
         if err.field.startswith("--"):
             raise
         raise InputError(option, err.allowed, err.got) from None
+
+
+def add_either(parser, first: tuple[str, str, str], second: tuple[str, str, str]) -> None:
+    """Two options of which the user must give exactly one; each is ``(flag, metavar, help)``."""
+    group = parser.add_mutually_exclusive_group(required=True)
+    for flag, metavar, text in (first, second):
+        group.add_argument(flag, metavar=metavar, help=text)
+
+
+def given(args, *choices: tuple[str, str]) -> tuple[str, float]:
+    """The option the user gave among ``choices`` (``(flag, dimension)``) and its SI value.
+
+    A dimension ending in ``+`` must be greater than zero.
+
+    >>> import argparse
+    >>> given(argparse.Namespace(temperature=None, co2_pressure="2 bar"),
+    ...       ("--temperature", "temperature"), ("--co2-pressure", "pressure+"))
+    ('--co2-pressure', 200000.0)
+    """
+    from co2routes.thermo.units import parse, parse_positive
+
+    for flag, dimension in choices:
+        text = getattr(args, flag.lstrip("-").replace("-", "_"))
+        if text is not None:
+            if dimension.endswith("+"):
+                return flag, parse_positive(text, flag, dimension[:-1])
+            return flag, parse(text, flag, dimension)
+    raise InputError(" or ".join(flag for flag, _ in choices), "one of them must be given")

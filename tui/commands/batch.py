@@ -78,8 +78,9 @@ def _readable(answer: dict) -> dict:
 
     out = {}
     cost = answer.get("cost_per_kg")
-    out["cost_per_kg"] = "unknown: a price is missing from the price book" if cost is None else \
-        format_value("cost_per_kg", cost).replace(" per kg", f" {answer.get('currency', '')} per kg")
+    missing = ", ".join(repr(c["price_key"]) for c in answer.get("costs", ()) if c.get("price_from") == "none")
+    out["cost_per_kg"] = f"unknown: a price is missing from the price book{' (' + missing + ')' if missing else ''}" \
+        if cost is None else format_value("cost_per_kg", cost).replace(" per kg", f" {answer.get('currency', '')} per kg")
     if answer.get("temperature_change_k", 0.0) is None:
         out["temperature_change_k"] = "– (not worked out for this route)"
     return out

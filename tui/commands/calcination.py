@@ -10,28 +10,21 @@ HELP = "equilibrium CO2 pressure over limestone and lime at a temperature, or th
 
 def add_arguments(parser: argparse.ArgumentParser) -> None:
     """Options of ``calcination``."""
-    group = parser.add_mutually_exclusive_group(required=True)
-    group.add_argument("--temperature", metavar="T",
-                       help="kiln temperature, e.g. '900 degC' (427-1100 degC)")
-    group.add_argument("--co2-pressure", metavar="P",
-                       help="CO2 partial pressure over the charge, e.g. '1 atm' or '425 ppm * 1 atm'")
+    from co2routes.tui.commands._options import add_either
+
+    add_either(parser, ("--temperature", "T", "kiln temperature, e.g. '900 degC' (427-1100 degC)"),
+               ("--co2-pressure", "P", "CO2 partial pressure over the charge, e.g. '1 atm' or '425 ppm * 1 atm'"))
 
 
 def run(args: argparse.Namespace) -> dict:
     """The equilibrium point's JSON answer."""
     from co2routes.thermo import cautions
     from co2routes.thermo.calcination import calcination_temperature, co2_pressure_over_calcite
-    from co2routes.thermo.units import parse, parse_positive
+    from co2routes.tui.commands._options import for_option, given
 
-    from co2routes.tui.commands._options import for_option
-
-    if args.temperature is not None:
-        with for_option("--temperature"):
-            point = co2_pressure_over_calcite(parse(args.temperature, "--temperature", "temperature"))
-    else:
-        with for_option("--co2-pressure"):
-            point = calcination_temperature(parse_positive(args.co2_pressure, "--co2-pressure",
-                                                           "pressure"))
+    option, value = given(args, ("--temperature", "temperature"), ("--co2-pressure", "pressure+"))
+    with for_option(option):
+        point = (co2_pressure_over_calcite if option == "--temperature" else calcination_temperature)(value)
     warnings = [
         "Equilibrium for pure calcite: kilns run hotter than this to calcine at a useful rate "
         "(common practice)."

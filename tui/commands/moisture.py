@@ -11,11 +11,10 @@ HELP = ("water in CO2 (gas, liquid or supercritical): saturated at a temperature
 
 def add_arguments(parser: argparse.ArgumentParser) -> None:
     """Options of ``moisture``."""
-    group = parser.add_mutually_exclusive_group(required=True)
-    group.add_argument("--temperature", metavar="T",
-                       help="temperature of gas saturated with water, e.g. '25 degC' (as leaving a bubbler)")
-    group.add_argument("--dew-point", metavar="T",
-                       help="dew point of the gas, e.g. '-40 degC' (a frost point below 0 degC)")
+    from co2routes.tui.commands._options import add_either
+
+    add_either(parser, ("--temperature", "T", "temperature of gas saturated with water, e.g. '25 degC' (as leaving a bubbler)"),
+               ("--dew-point", "T", "dew point of the gas, e.g. '-40 degC' (a frost point below 0 degC)"))
     parser.add_argument("--pressure", metavar="P", default="1 atm",
                         help="absolute total pressure of the gas (default '1 atm')")
 
@@ -23,13 +22,11 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 def run(args: argparse.Namespace) -> dict:
     """The gas's water content as the JSON answer (Spycher et al. 2003 model, CO2 phase named)."""
     from co2routes.thermo import cautions, water_co2
-    from co2routes.thermo.units import parse, parse_positive
-    from co2routes.tui.commands._options import for_option
+    from co2routes.thermo.units import parse_positive
+    from co2routes.tui.commands._options import for_option, given
 
     p = parse_positive(args.pressure, "--pressure", "pressure")
-    option, text = (("--temperature", args.temperature) if args.temperature is not None
-                    else ("--dew-point", args.dew_point))
-    t = parse(text, option, "temperature")
+    option, t = given(args, ("--temperature", "temperature"), ("--dew-point", "temperature"))
     dew = args.temperature is None
     with for_option(option):
         w = water_co2.saturated_water_in_co2(t, p, vapour=dew)

@@ -14,6 +14,7 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """Every route and option, plus any route that failed to load."""
+    from co2routes.sources.prices import route_prices
     from co2routes.sources.registry import catalogue
 
     cat = catalogue()
@@ -22,7 +23,8 @@ def run(args: argparse.Namespace) -> dict:
             {"id": r.id, "label": r.label, "options": [
                 {"key": o.key, "label": o.label, "dimension": o.dimension, "default": o.default,
                  "choices": list(o.choices), "low": o.low, "high": o.high, "help": o.help}
-                for o in r.options]}
+                for o in r.options],
+             "default_prices": {k: p.text for k, p in route_prices(r).items()}}
             for r in cat.routes
         ],
         "failures": list(cat.failures),
@@ -39,5 +41,7 @@ def render(answer: dict, args: argparse.Namespace) -> str:
         for o in route["options"]:
             allowed = f" one of {', '.join(o['choices'])}" if o["choices"] else f" ({o['dimension']})"
             lines.append(f"    {o['key']} = {o['default']!r}{allowed}  {o['help']}".rstrip())
+        lines += [f"    price {k} = {text!r} (the route's default, when the price book has none)"
+                  for k, text in route.get("default_prices", {}).items()]
     lines += [f"note: {f}" for f in answer["failures"]]
     return "\n".join(lines)

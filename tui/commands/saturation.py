@@ -10,27 +10,20 @@ HELP = "CO2 saturation pressure and liquid/vapour densities at a temperature, or
 
 def add_arguments(parser: argparse.ArgumentParser) -> None:
     """Options of ``saturation``."""
-    group = parser.add_mutually_exclusive_group(required=True)
-    group.add_argument("--temperature", metavar="T",
-                       help="liquid temperature, e.g. '20 degC' (-56.56 to 30.98 degC)")
-    group.add_argument("--pressure", metavar="P",
-                       help="absolute pressure, e.g. '50 bar' (5.18 to 73.77 bar)")
+    from co2routes.tui.commands._options import add_either
+
+    add_either(parser, ("--temperature", "T", "liquid temperature, e.g. '20 degC' (-56.56 to 30.98 degC)"),
+               ("--pressure", "P", "absolute pressure, e.g. '50 bar' (5.18 to 73.77 bar)"))
 
 
 def run(args: argparse.Namespace) -> dict:
     """The saturation point as the JSON answer."""
     from co2routes.thermo import cautions, co2
-    from co2routes.thermo.units import parse
-    from co2routes.tui.commands._options import for_option
+    from co2routes.tui.commands._options import for_option, given
 
-    if args.temperature is not None:
-        t = parse(args.temperature, "--temperature", "temperature")
-        with for_option("--temperature"):
-            sat = co2.saturation_at_temperature(t)
-    else:
-        p = parse(args.pressure, "--pressure", "pressure")
-        with for_option("--pressure"):
-            sat = co2.saturation_at_pressure(p)
+    option, value = given(args, ("--temperature", "temperature"), ("--pressure", "pressure"))
+    with for_option(option):
+        sat = (co2.saturation_at_temperature if option == "--temperature" else co2.saturation_at_pressure)(value)
     warnings = []
     if co2.CRITICAL_TEMPERATURE_K - sat.temperature_k < 2.0:
         warnings.append("Within 2 K of the critical point (30.98 degC): liquid and vapour densities "

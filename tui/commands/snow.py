@@ -20,11 +20,10 @@ def _draw(text: str) -> str:
 
 def add_arguments(parser: argparse.ArgumentParser) -> None:
     """Options of ``snow``."""
-    group = parser.add_mutually_exclusive_group(required=True)
-    group.add_argument("--liquid-temperature", metavar="T",
-                       help="temperature of the saturated liquid, e.g. '20 degC' (-56.56 to 30.98 degC)")
-    group.add_argument("--liquid-pressure", metavar="P",
-                       help="pressure of the saturated liquid, e.g. '57 bar' (5.18 to 73.77 bar)")
+    from co2routes.tui.commands._options import add_either
+
+    add_either(parser, ("--liquid-temperature", "T", "temperature of the saturated liquid, e.g. '20 degC' (-56.56 to 30.98 degC)"),
+               ("--liquid-pressure", "P", "pressure of the saturated liquid, e.g. '57 bar' (5.18 to 73.77 bar)"))
     parser.add_argument("--liquid-mass", metavar="M", help="liquid released, e.g. '10 kg'")
     parser.add_argument("--draw", choices=("liquid", "vapor"), default="liquid", type=_draw,
                         help="take CO2 from the liquid side (dip tube or inverted cylinder, the "
@@ -49,17 +48,12 @@ def run(args: argparse.Namespace) -> dict:
     """The flash result as the JSON answer."""
     from co2routes.thermo import cautions, flash
     from co2routes.thermo.units import parse, parse_positive
-    from co2routes.tui.commands._options import for_option
+    from co2routes.tui.commands._options import for_option, given
 
     mass = None if args.liquid_mass is None else parse_positive(args.liquid_mass, "--liquid-mass", "mass")
-    if args.liquid_temperature is not None:
-        t = parse(args.liquid_temperature, "--liquid-temperature", "temperature")
-        with for_option("--liquid-temperature"):
-            result = flash.flash_at_temperature(t, mass)
-    else:
-        p = parse(args.liquid_pressure, "--liquid-pressure", "pressure")
-        with for_option("--liquid-pressure"):
-            result = flash.flash_at_pressure(p, mass)
+    option, value = given(args, ("--liquid-temperature", "temperature"), ("--liquid-pressure", "pressure"))
+    with for_option(option):
+        result = (flash.flash_at_temperature if option == "--liquid-temperature" else flash.flash_at_pressure)(value, mass)
     warnings = [
         "The fraction is the adiabatic ideal: snow horns and bags collect less, since some snow is "
         "carried off with the gas and warm surfaces sublime it."

@@ -20,7 +20,8 @@ from textual.containers import Horizontal, Vertical
 from textual.screen import Screen
 from textual.widgets import Input, ProgressBar, Static, TabbedContent
 
-from co2routes.tui.fields import BASE_FIELDS, Field, match_field, price_value
+from co2routes.tui.editing import document_after, refusal_marks
+from co2routes.tui.fields import BASE_FIELDS, Field
 from co2routes.tui.output import clean_text
 from co2routes.tui.screens.filing import Filing
 from co2routes.tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES, WhatIf
@@ -123,13 +124,8 @@ class MainScreen(Filing, Working, WhatIf, Screen):
             return
         self._idle()
         form = self.query_one(ScenarioForm)
-        field = match_field(form.fields, err.field) or edited_field
-        reason = err.allowed + (f" (got {err.got})" if err.got is not None else "")
-        if edited_field is not None and field is not edited_field:
-            form.mark(edited_field, None)
-        if field is not None and form.row_of(field) is not None:
-            form.mark(field, reason if field is not edited_field or field.dotted in err.field
-                      else f"{err.field}: {reason}")
+        for field, reason in refusal_marks(form.fields, err, edited_field):
+            form.mark(field, reason)
         kept = "kept the last good results" if self.outcome else "no results yet"
         self._say(f"{err} — {kept}", True)
 
@@ -232,9 +228,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
     @on(FieldEdited)
     def _edited(self, event: FieldEdited) -> None:
         f = event.field
-        value = price_value(self.book, f.keys[-1], event.text) if f.keys[0] == "prices" \
-            else f.to_document(event.text)
-        new = edited(self.document, f.keys, value)
+        new = document_after(self.document, f, event.text, self.book)
         if new == self.document:
             return
         self.document = new

@@ -180,13 +180,16 @@ def breakdown(row: Any, currency: str) -> Group:
     r = row.result
     table = _table("item", "amount", "unit", f"{currency}/unit", currency)
     for line in r.costs:
-        table.add_row(line.item, _n(line.amount), line.unit, _n(line.unit_price, "{:.4g}"),
+        item = line.item + (" (route's default price)" if line.price_from == "route default" else "")
+        table.add_row(item, _n(line.amount), line.unit, _n(line.unit_price, "{:.4g}"),
                       _n(line.cost, "{:.2f}"))
     total = r.total_cost
     parts: list[Any] = [table, Text(f"batch {_n(total, '{:.2f}')} {currency}, "
                                     f"{_n(r.cost_per_kg, '{:.2f}')} {currency} per kg CO2", style="bold")]
     if total is None:
-        parts.append(Text("a price is unknown: give it under Prices in the form", style="yellow"))
+        keys = ", ".join(repr(line.price_key) for line in r.costs if line.cost is None and line.price_key)
+        parts.append(Text(f"a price is unknown{' (' + keys + ')' if keys else ''}: give it under Prices in the form",
+                          style="yellow"))
     return Group(*parts)
 
 
