@@ -83,6 +83,7 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
         uses += (Use("compression (electric motor)", delivery.electricity_kwh, "energy_kwh", "electricity"),)
     energy = Energy(made.energy.electricity_kwh + dried.electricity_kwh + delivery.electricity_kwh,
                     made.energy.fuel_kwh, made.energy.heat_kwh)
+    costs = cost_lines(made.reagents, uses, scenario.prices, route_prices(route))
     planned = PlannedRoute(
         route_id=route.id, label=route.label, made=made, product_kg=product_kg, uses=uses,
         energy=energy, time_h=max(made.time_h, delivery.time_h),
@@ -90,7 +91,7 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
         cautions=_unique(made.cautions + dried.cautions + delivery.cautions),
         notes=_unique(made.notes + delivery.notes),
         dryer=dried.dryer, delivery=delivery if scenario.end_product != "gas" else None,
-        costs=cost_lines(made.reagents, uses, scenario.prices, route_prices(route)))
+        costs=costs)
     check_total(route.id, planned.total_cost)
     return planned
 
