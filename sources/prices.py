@@ -143,21 +143,35 @@ def load_book(path: Path | None = None) -> PriceBook:
 def reagent_cost(reagent: Reagent, book: PriceBook) -> CostLine:
     """The cost line of a reagent as bought.
 
-    With a strength on the price, the price is per kg of solution at that strength and the
-    reagent is costed by its pure content: cost = pure mass / strength x price. A per-volume price
-    uses the reagent's volume.
+    A price that states a strength s is per kg (or per litre) of solution at that strength: the
+    reagent is bought by its pure content, m = pure mass / s, and a per-litre price converts
+    through the density of that solution, V = m / rho(s) (:func:`co2routes.thermo.solutions.solution_density`,
+    CRC Handbook densities at 20 degC). When s differs from the recipe's strength the line's unit
+    says so ("kg at 31%"): the recipe's solution is made up from it with water. The line's item is
+    always the reagent's name. A price with no strength applies to the reagent as the recipe uses
+    it (its mass, or its volume).
     """
     price = book.get(reagent.price_key)
     name = f"{reagent.name}"
+    unknown = CostLine(name, reagent.mass_kg, "kg", None, None)
     if price is None:
-        return CostLine(name, reagent.mass_kg, "kg", None, None)
+        return unknown
+    s = price.strength
+    at = f" at {s:.0%}" if s is not None and (reagent.strength is None or abs(s - reagent.strength) > 1e-9) else ""
     if price.per == "mass":
-        mass = reagent.pure_mass_kg / price.strength if price.strength else reagent.mass_kg
-        return CostLine(name, mass, "kg", price.amount, mass * price.amount)
-    if price.per == "volume" and reagent.volume_l is not None:
-        volume_m3 = reagent.volume_l / 1000.0
-        return CostLine(name, reagent.volume_l, "L", price.amount / 1000.0, volume_m3 * price.amount)
-    return CostLine(name, reagent.mass_kg, "kg", None, None)
+        mass = reagent.pure_mass_kg / s if s else reagent.mass_kg
+        return CostLine(name, mass, "kg" + at, price.amount, mass * price.amount)
+    if price.per == "volume":
+        if s is not None and reagent.solute is not None:
+            from co2routes.thermo.solutions import solution_density
+
+            volume_m3 = reagent.pure_mass_kg / s / solution_density(reagent.solute, s)
+        elif s is None and reagent.volume_l is not None:
+            volume_m3 = reagent.volume_l / 1000.0
+        else:
+            return CostLine(name, reagent.mass_kg, "kg", None, None)
+        return CostLine(name, volume_m3 * 1000.0, "L" + at, price.amount / 1000.0, volume_m3 * price.amount)
+    return unknown
 
 
 def use_cost(use: Use, book: PriceBook) -> CostLine:
