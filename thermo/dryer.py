@@ -208,7 +208,7 @@ def size_dryer(inp: DryerInput) -> DryerResult:
     >>> r = size_dryer(DryerInput(co2_flow_kg_s=2.0 / 86400, inlet_temperature_k=298.15,
     ...                           desiccant="molecular-sieve-3a", cycle_s=7 * 86400))
     >>> round(r.water_load_kg_per_cycle, 3), r.reaches_target
-    (0.185, True)
+    (0.187, True)
     """
     d = get_desiccant(inp.desiccant)
     m_co2 = require_positive("flow", inp.co2_flow_kg_s)
