@@ -19,7 +19,7 @@ from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
 
 #: Price-book key, display name and formula of each fuel bought by mass.
-_BOUGHT = {"propane": ("propane", "propane (LPG)"), "butane": ("butane", "butane (LPG)"),
+_BOUGHT = {"propane": ("propane", "propane (LPG)"), "butane": ("butane", "n-butane (LPG butane)"),
            "ethanol": ("ethanol-fuel", "ethanol (burner fuel)")}
 #: Density of liquid ethanol at 20 degC [kg/L] (CRC Handbook: 0.7893 g/cm3).
 ETHANOL_DENSITY_KG_L = 0.7893
