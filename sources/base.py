@@ -183,6 +183,9 @@ class Use:
     amount: float
     dimension: str
     price_key: str
+    feed_kg: float = 0.0
+    """Mass of feed this use consumes [kg] (a fuel bought by its heating value, e.g. natural gas);
+    counted in :attr:`RouteResult.reagent_kg_per_kg`."""
 
 
 @dataclass(frozen=True, slots=True)
@@ -270,8 +273,9 @@ class RouteResult:
 
     @property
     def reagent_kg_per_kg(self) -> float:
-        """Mass of everything bought per kg of end product [kg/kg]."""
-        return sum(r.mass_kg for r in self.reagents) / self.per_kg_basis
+        """Mass of everything bought per kg of end product [kg/kg], fuel bought by its heating
+        value included (:attr:`Use.feed_kg`)."""
+        return (sum(r.mass_kg for r in self.reagents) + sum(u.feed_kg for u in self.uses)) / self.per_kg_basis
 
     @property
     def total_cost(self) -> float | None:

@@ -76,7 +76,8 @@ class CombustionRoute:
         reagents: list[Reagent] = []
         uses: list[Use] = []
         if fuel == "methane":
-            uses.append(Use("natural gas (higher heating value)", fuel_kwh, "energy_kwh", "natural-gas"))
+            uses.append(Use("natural gas (higher heating value)", fuel_kwh, "energy_kwh", "natural-gas",
+                            feed_kg=fuel_kg))
         else:
             key, name = _BOUGHT[fuel]
             volume = fuel_kg / ETHANOL_DENSITY_KG_L if fuel == "ethanol" else None

@@ -60,3 +60,17 @@ def test_malt_extract_ferments_only_its_fermentable_share():
     assert extract.pure_mass_kg == pytest.approx(g.reagents[0].mass_kg, rel=1e-12)
     half = FERMENTATION.compute(_ferment(sugar="malt-extract", malt_fermentable="50 %"))
     assert half.reagents[0].mass_kg == pytest.approx(1.5 * FERMENTATION.compute(_ferment(sugar="malt-extract")).reagents[0].mass_kg, rel=1e-9)
+
+
+def test_methane_burnt_counts_in_feed_per_kg():
+    # Natural gas is bought per kWh, but the methane burnt is feed: CH4 -> CO2 gives
+    # 16.043 / 44.0095 = 0.3645 kg CH4 per kg CO2 (IUPAC atomic weights), divided by the 90 %
+    # capture and the CO2 of the air also recovered (1.000 mol CO2 per mol CH4 within 0.1 %,
+    # air at 425 ppm); 1 %. It was 0.00 in compare's feed column.
+    from co2routes.sources.compare import evaluate
+    from co2routes.sources.registry import catalogue
+    from co2routes.sources.scenario import demo
+
+    r = evaluate(catalogue().get("combustion"), demo(), options={"fuel": "methane"})
+    per_kg_co2 = r.reagent_kg_per_kg * r.per_kg_basis / r.co2_kg
+    assert per_kg_co2 == pytest.approx(16.043 / 44.0095 / 0.90, rel=0.01)
