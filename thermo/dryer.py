@@ -233,6 +233,10 @@ def size_dryer(inp: DryerInput) -> DryerResult:
                          f"({y_in * 1e6:.6g} ppmv, dew point {water_co2.dew_point_in_co2(y_in * 1e6, p) - 273.15:.1f} degC)",
                          got=f"{target:.6g} ppmv")
     warnings: list[str] = []
+    phase = water_co2.saturated_water_in_co2(t_in, p).co2_phase
+    if phase != "gas":
+        warnings.append(f"The CO2 is {phase} at the inlet ({t_in - 273.15:.1f} degC, {p / 1e5:.4g} bar): "
+                        "it holds far more water than a gas, and the bed is sized here as for a gas.")
     p_out, q_res = outlet_limit(d, t_in)
     if p_out >= y_in * p:
         raise InputError("desiccant", f"{d.id} cannot dry this gas: its outlet floor "
