@@ -4,8 +4,9 @@ Stoichiometry (Gay-Lussac): C6H12O6 -> 2 C2H5OH + 2 CO2, 0.4886 kg CO2 per kg gl
 first hydrolysed, C12H22O11 + H2O -> 2 C6H12O6. Dry malt extract is only partly fermentable: its
 fermentable share (option ``malt_fermentable``, default 75 % as glucose equivalent: common
 practice, the usual apparent attenuation of malt-extract worts; from memory) is counted as glucose,
-the rest (dextrins, protein) stays in the wash. Pure maltose is refused: the species data carry no
-published formation enthalpy for it, and borrowing sucrose's would give its heat a false precision.
+the rest (dextrins, protein) stays in the wash. Pure maltose is not offered (refused as an unknown
+choice): the species data carry no published formation enthalpy for it, and borrowing sucrose's
+would give its heat a false precision.
 Only a fraction of the sugar follows
 that equation (option ``efficiency``): the rest goes to glycerol, yeast growth and other by-products
 and is carried here as sugar left in the wash, so that the balances close.
@@ -39,12 +40,7 @@ SUGARS = {
     "malt-extract": ("dry malt extract", "C6H12O6(s)", None, "malt-extract",
                      "Dry malt extract: its fermentable share is counted as glucose (maltose's own "
                      "hydrolysis heat, a few kJ/mol, is left out); the rest stays in the wash."),
-    "maltose": ("maltose (malt sugar)", "C12H22O11(s)", None, "maltose", ""),
 }
-#: Sugars refused, with the reason (no published data carried for them).
-REFUSED = {"maltose": "pure maltose is not planned: no published formation enthalpy of maltose is in "
-                      "the species data, so its heat would be a guess; use glucose, sucrose or "
-                      "malt-extract (dry malt extract, with its fermentable share)"}
 DISSOLVE = "C6H12O6(s) -> C6H12O6(aq)"
 FERMENT = "C6H12O6(aq) -> 2 C2H5OH(aq) + 2 CO2(g)"
 #: Reference time to finish [days] at T_REF and C_REF, and the Q10 of the rate (common practice).
@@ -59,7 +55,8 @@ WATER_DENSITY_20C = 998.2
 OPTIONS = (
     Option("sugar", "sugar", "choice", "sucrose", choices=tuple(SUGARS),
            help="glucose (dextrose), sucrose (table sugar, inverted by the yeast) or malt-extract "
-                "(dry malt extract, partly fermentable); maltose is refused (no data)"),
+                "(dry malt extract, partly fermentable); pure maltose is not offered: no published "
+                "formation enthalpy of it is in the species data, so its heat would be a guess"),
     Option("efficiency", "share of theoretical yield", "fraction", "92 %", low=0.5, high=1.0,
            help="share of the sugar that follows Gay-Lussac's equation; practical 90-95 % "
                 "(common practice), the rest goes to glycerol and yeast growth"),
@@ -96,8 +93,6 @@ def plan(request: RouteRequest) -> Batch:
     from co2routes.thermo.reaction import parse_reaction
 
     opt = settings(OPTIONS, request.options)
-    if opt["sugar"] in REFUSED:
-        raise InputError("option sugar", REFUSED[opt["sugar"]], got=opt["sugar"])
     label, sugar_sp, hydrolysis, _, _ = SUGARS[opt["sugar"]]
     t = request.site.temperature_k if opt["temperature"] is None else float(opt["temperature"])
     if not (278.15 <= t <= 313.15):
