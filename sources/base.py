@@ -155,6 +155,10 @@ class Reagent:
     volume_l: float | None
     price_key: str
     basis: str = "mass"
+    strength: float | None = None
+    """w/w strength of a solution as the recipe uses it (None: a pure product)."""
+    solute: str | None = None
+    """Density-table name (:mod:`co2routes.thermo.solutions`) of a solution, for per-litre prices."""
 
 
 @dataclass(frozen=True, slots=True)
@@ -179,6 +183,9 @@ class Use:
     amount: float
     dimension: str
     price_key: str
+    feed_kg: float = 0.0
+    """Mass of feed this use consumes [kg] (a fuel bought by its heating value, e.g. natural gas);
+    counted in :attr:`RouteResult.reagent_kg_per_kg`."""
 
 
 @dataclass(frozen=True, slots=True)

@@ -110,8 +110,9 @@ class PlannedRoute:
 
     @property
     def reagent_kg_per_kg(self) -> float:
-        """Mass of everything bought per kg of end product [kg/kg]."""
-        return sum(r.mass_kg for r in self.reagents) / self.product_kg
+        """Mass of everything bought per kg of end product [kg/kg], fuel bought by its heating
+        value included (:attr:`~co2routes.sources.base.Use.feed_kg`)."""
+        return (sum(r.mass_kg for r in self.reagents) + sum(u.feed_kg for u in self.uses)) / self.product_kg
 
     @property
     def total_cost(self) -> float | None:

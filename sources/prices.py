@@ -165,21 +165,35 @@ def find_price(key: str, book: PriceBook, defaults: Mapping[str, Price] | None =
 def reagent_cost(reagent: Reagent, book: PriceBook, defaults: Mapping[str, Price] | None = None) -> CostLine:
     """The cost line of a reagent as bought (its price from the book, else ``defaults``).
 
-    With a strength on the price, the price is per kg of solution at that strength and the
-    reagent is costed by its pure content: cost = pure mass / strength x price. A per-volume price
-    uses the reagent's volume.
+    A price that states a strength s is per kg (or per litre) of solution at that strength: the
+    reagent is bought by its pure content, m = pure mass / s, and a per-litre price converts
+    through the density of that solution, V = m / rho(s) (:func:`co2routes.thermo.solutions.solution_density`,
+    CRC Handbook densities at 20 degC). When s differs from the recipe's strength the line's unit
+    says so ("kg at 31%"): the recipe's solution is made up from it with water. The line's item is
+    always the reagent's name. A price with no strength applies to the reagent as the recipe uses
+    it (its mass, or its volume).
     """
     price, source = find_price(reagent.price_key, book, defaults)
     name = f"{reagent.name}"
     line = CostLine(name, reagent.mass_kg, "kg", None, None, reagent.price_key, "none")
     if price is None:
         return line
+    s = price.strength
+    at = f" at {s:.0%}" if s is not None and (reagent.strength is None or abs(s - reagent.strength) > 1e-9) else ""
     if price.per == "mass":
-        mass = reagent.pure_mass_kg / price.strength if price.strength else reagent.mass_kg
-        return replace(line, amount=mass, unit_price=price.amount, cost=mass * price.amount, price_from=source)
-    if price.per == "volume" and reagent.volume_l is not None:
-        volume_m3 = reagent.volume_l / 1000.0
-        return replace(line, amount=reagent.volume_l, unit="L", unit_price=price.amount / 1000.0,
+        mass = reagent.pure_mass_kg / s if s else reagent.mass_kg
+        return replace(line, amount=mass, unit="kg" + at, unit_price=price.amount, cost=mass * price.amount,
+                       price_from=source)
+    if price.per == "volume":
+        if s is not None and reagent.solute is not None:
+            from co2routes.thermo.solutions import solution_density
+
+            volume_m3 = reagent.pure_mass_kg / s / solution_density(reagent.solute, s)
+        elif s is None and reagent.volume_l is not None:
+            volume_m3 = reagent.volume_l / 1000.0
+        else:
+            return line
+        return replace(line, amount=volume_m3 * 1000.0, unit="L" + at, unit_price=price.amount / 1000.0,
                        cost=volume_m3 * price.amount, price_from=source)
     return line
 

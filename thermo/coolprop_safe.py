@@ -55,7 +55,7 @@ def props(output: str, name1: str, value1: float, name2: str, value2: float, flu
         return _raw(output, name1, value1, name2, value2, fluid)
     except ValueError:
         pass
-    names = {name1: value1, name2: value2}
+    names = {name1.split("|")[0]: value1, name2.split("|")[0]: value2}  # "P|gas" imposes a phase
     if "P" in names and len(set(names) & _BY_T) == 1:
         other = (set(names) & _BY_T).pop()
         try:
@@ -63,9 +63,11 @@ def props(output: str, name1: str, value1: float, name2: str, value2: float, flu
         except ValueError:
             pass
     elif set(names) == {"P", "T"}:
+        t_first = name1.startswith("T")
         for dt in (1e-3, -1e-3):
             try:
-                return _raw(output, "P", names["P"], "T", names["T"] + dt, fluid)
+                return _raw(output, name1, value1 + (dt if t_first else 0.0), name2,
+                            value2 + (0.0 if t_first else dt), fluid)
             except ValueError:
                 continue
     raise _failed(output, name1, value1, name2, value2, fluid)

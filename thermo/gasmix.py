@@ -115,8 +115,10 @@ def gas_state(temperature_k: float, pressure_pa: float, composition: Mapping[str
                     masses.append(m)
             continue
         try:
-            rho_i = cp.PropsSI("D", "T", t, "P", p, fluid)
-            mu_i = cp.PropsSI("V", "T", t, "P", p, fluid)
+            from co2routes.thermo.coolprop_safe import props
+
+            rho_i = props("D", "T", t, "P", p, fluid)  # retried near the critical point
+            mu_i = props("V", "T", t, "P", p, fluid)
         except ValueError as err:
             raise InputError("inlet conditions", f"{name} properties are not available at "
                              f"{t:.2f} K and {p:.6g} Pa", got=str(err).splitlines()[0][:80]) from None

@@ -42,6 +42,13 @@ ALIASES: dict[str, str] = {
     "C6H6(l)": "C6H6(L)",
 }
 
+#: Gas isomers of one formula, named apart: user name -> NASA name (McBride et al. 2002 carry
+#: both butanes, with their own formation enthalpies: n-butane -125.8, isobutane -134.2 kJ/mol).
+GAS_ISOMERS: dict[str, str] = {
+    "n-C4H10(g)": "C4H10,n-butane",
+    "i-C4H10(g)": "C4H10,isobutane",
+}
+
 #: Common names accepted as well as formulas (lower case, phase tag kept).
 COMMON_NAMES: dict[str, str] = {
     "baking soda(s)": "NaHCO3(s)",
@@ -56,6 +63,9 @@ COMMON_NAMES: dict[str, str] = {
     "quicklime(s)": "CaO(s)",
     "slaked lime(s)": "Ca(OH)2(s)",
     "citric acid(s)": "C6H8O7(s)",
+    "n-butane(g)": "n-C4H10(g)",
+    "butane(g)": "n-C4H10(g)",
+    "isobutane(g)": "i-C4H10(g)",
     "glucose(s)": "C6H12O6(s)",
     "dextrose(s)": "C6H12O6(s)",
     "glucose(aq)": "C6H12O6(aq)",
@@ -130,6 +140,8 @@ def _tables() -> tuple[dict, dict]:
         if "+" in sp.name or "-" in sp.name[1:]:
             continue  # ions and charged radicals stay out of the user's list
         add(_user_formula(sp.name) + "(g)", sp, "nasa_gas")
+    for alias, ct_name in GAS_ISOMERS.items():
+        add(alias, by_ct[ct_name], "nasa_gas")
     for alias, ct_name in ALIASES.items():
         if ct_name in condensed_names:
             add(alias, by_ct[ct_name], "nasa_condensed")
@@ -174,6 +186,10 @@ def canonical(name: str) -> str:
     for key in info:
         if key.lower() == low:
             return key
+    isomers = [k for k in GAS_ISOMERS if k.split("-", 1)[1].lower() == low]
+    if isomers:
+        raise InputError("species", f"{text} has isomers with different data: write "
+                         f"{' or '.join(isomers)} (n-butane or isobutane)", got=repr(text))
     raise InputError("species", _unknown_message(text), got=repr(text))
 
 

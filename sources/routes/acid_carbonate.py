@@ -253,12 +253,13 @@ def compute(request: RouteRequest) -> RouteResult:
     generated_kg = (batch.outputs["CO2(g)"] + batch.outputs["CO2(aq)"]) * m["CO2(g)"]
     dissolved_kg = batch.outputs["CO2(aq)"] * m["CO2(g)"]
     if acid == "citric":
-        acid_reagent = Reagent(label, "C6H8O7", acid_pure_kg, acid_pure_kg, None, acid_price)
+        acid_reagent = Reagent(label, "C6H8O7", acid_pure_kg, acid_pure_kg, None, acid_price,
+                               solute=dens_name)
         water_kg = batch.acid_solution_kg - acid_pure_kg + batch.added_water_kg
     else:
         volume_l = solutions.acid_volume(dens_name, w, acid_pure_kg) * 1000.0
         acid_reagent = Reagent(f"{label} {w:.0%}", _formula(acid_sp), batch.acid_solution_kg,
-                               acid_pure_kg, volume_l, acid_price)
+                               acid_pure_kg, volume_l, acid_price, strength=w, solute=dens_name)
         water_kg = batch.added_water_kg
     reagents = (acid_reagent, Reagent(carb_label, _formula(carb_sp), carb_kg, carb_kg, None, carbonate))
 
@@ -287,10 +288,11 @@ def compute(request: RouteRequest) -> RouteResult:
         warnings.append("Sulfuric acid on limestone coats the chips with calcium sulfate, which stops "
                         "the reaction after a few per cent: grind the stone fine and stir hard, or use "
                         "hydrochloric acid.")
-    if acid == "hcl" and w > HCL_FUMING:
-        warnings.append(f"Hydrochloric acid at {w:.0%} is above the 20 % azeotrope and gives off HCl "
-                        "gas: the raw gas carries some HCl (not counted here); bubble it through water "
-                        "or a bicarbonate wash before the dryer.")
+    w_mixed = acid_pure_kg / (batch.acid_solution_kg + batch.added_water_kg)
+    if acid == "hcl" and w_mixed > HCL_FUMING:
+        warnings.append(f"Hydrochloric acid at {w_mixed:.0%} as mixed is above the 20 % azeotrope and "
+                        "gives off HCl gas: the raw gas carries some HCl (not counted here); bubble it "
+                        "through water or a bicarbonate wash before the dryer.")
     if acid == "sulfuric" and w > SULFURIC_STRONG:
         warnings.append(f"{w:.0%} sulfuric acid heats violently on meeting water: pour it slowly into "
                         "the water already in the vessel, never the reverse.")

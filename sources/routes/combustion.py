@@ -20,7 +20,7 @@ from co2routes.thermo.constants import WATER_MOLAR_MASS
 from co2routes.thermo.gasmix import normalise
 
 #: Price-book key, display name and formula of each fuel bought by mass.
-_BOUGHT = {"propane": ("propane", "propane (LPG)"), "butane": ("butane", "butane (LPG)"),
+_BOUGHT = {"propane": ("propane", "propane (LPG)"), "butane": ("butane", "n-butane (LPG butane)"),
            "ethanol": ("ethanol-fuel", "ethanol (burner fuel)")}
 #: Density of liquid ethanol at 20 degC [kg/L] (CRC Handbook: 0.7893 g/cm3).
 ETHANOL_DENSITY_KG_L = 0.7893
@@ -77,7 +77,8 @@ class CombustionRoute:
         reagents: list[Reagent] = []
         uses: list[Use] = []
         if fuel == "methane":
-            uses.append(Use("natural gas (higher heating value)", fuel_kwh, "energy_kwh", "natural-gas"))
+            uses.append(Use("natural gas (higher heating value)", fuel_kwh, "energy_kwh", "natural-gas",
+                            feed_kg=fuel_kg))
         else:
             key, name = _BOUGHT[fuel]
             volume = fuel_kg / ETHANOL_DENSITY_KG_L if fuel == "ethanol" else None

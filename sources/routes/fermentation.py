@@ -1,7 +1,13 @@
-"""Sugar fermented by yeast: glucose, sucrose (inverted first) or maltose to ethanol and CO2.
+"""Sugar fermented by yeast: glucose, sucrose (inverted first) or dry malt extract to ethanol and CO2.
 
-Stoichiometry (Gay-Lussac): C6H12O6 -> 2 C2H5OH + 2 CO2, 0.4886 kg CO2 per kg glucose; sucrose and
-maltose are first hydrolysed, C12H22O11 + H2O -> 2 C6H12O6. Only a fraction of the sugar follows
+Stoichiometry (Gay-Lussac): C6H12O6 -> 2 C2H5OH + 2 CO2, 0.4886 kg CO2 per kg glucose; sucrose is
+first hydrolysed, C12H22O11 + H2O -> 2 C6H12O6. Dry malt extract is only partly fermentable: its
+fermentable share (option ``malt_fermentable``, default 75 % as glucose equivalent: common
+practice, the usual apparent attenuation of malt-extract worts; from memory) is counted as glucose,
+the rest (dextrins, protein) stays in the wash. Pure maltose is not offered (refused as an unknown
+choice): the species data carry no published formation enthalpy for it, and borrowing sucrose's
+would give its heat a false precision.
+Only a fraction of the sugar follows
 that equation (option ``efficiency``): the rest goes to glycerol, yeast growth and other by-products
 and is carried here as sugar left in the wash, so that the balances close.
 
@@ -42,9 +48,9 @@ SUGARS = {
     "glucose": ("glucose (dextrose)", "C6H12O6(s)", None, "glucose", ""),
     "sucrose": ("sucrose (table sugar)", "C12H22O11(s)", "C12H22O11(s) + H2O(l) -> 2 C6H12O6(aq)",
                 "sucrose", ""),
-    "maltose": ("maltose (malt sugar)", "C12H22O11(s)", "C12H22O11(s) + H2O(l) -> 2 C6H12O6(aq)",
-                "maltose", "Maltose has the formula of sucrose; its heat uses sucrose's formation "
-                "enthalpy (the species data carry no maltose), a difference of a few kJ/mol."),
+    "malt-extract": ("dry malt extract", "C6H12O6(s)", None, "malt-extract",
+                     "Dry malt extract: its fermentable share is counted as glucose (maltose's own "
+                     "hydrolysis heat, a few kJ/mol, is left out); the rest stays in the wash."),
 }
 DISSOLVE = "C6H12O6(s) -> C6H12O6(aq)"
 FERMENT = "C6H12O6(aq) -> 2 C2H5OH(aq) + 2 CO2(g)"
@@ -59,7 +65,9 @@ WATER_DENSITY_20C = 998.2
 
 OPTIONS = (
     Option("sugar", "sugar", "choice", "sucrose", choices=tuple(SUGARS),
-           help="glucose (dextrose), sucrose (table sugar, inverted by the yeast) or maltose"),
+           help="glucose (dextrose), sucrose (table sugar, inverted by the yeast) or malt-extract "
+                "(dry malt extract, partly fermentable); pure maltose is not offered: no published "
+                "formation enthalpy of it is in the species data, so its heat would be a guess"),
     Option("efficiency", "share of theoretical yield", "fraction", "92 %", low=0.5, high=1.0,
            help="share of the sugar that follows Gay-Lussac's equation; practical 90-95 % "
                 "(common practice), the rest goes to glycerol and yeast growth"),
@@ -78,6 +86,9 @@ OPTIONS = (
     Option("byproduct", "CO2 as a by-product of a brew", "choice", "no", choices=YES_NO,
            help="yes: the brew is made anyway, so sugar, yeast, water and vessels cost the CO2 "
                 "nothing; collection, drying and delivery are still charged"),
+    Option("malt_fermentable", "fermentable share of malt extract", "fraction", "75 %", low=0.3, high=1.0,
+           help="kg of fermentable sugar (as glucose) per kg of dry malt extract (common practice "
+                "about 75 %)"),
 )
 
 
@@ -157,11 +168,14 @@ def compute(request: RouteRequest) -> RouteResult:
     label, sugar_sp, _, price_key, sugar_note = SUGARS[opt["sugar"]]
     mm = {n: species.molar_mass(n) for n in (*batch.inputs, *batch.outputs)}
     sugar_kg = batch.inputs[sugar_sp] * mm[sugar_sp]
+    share = opt["malt_fermentable"] if opt["sugar"] == "malt-extract" else 1.0
+    bought_kg = sugar_kg / share
     must_l = batch.must_m3 * 1000.0
     yeast_kg = opt["yeast"] * batch.must_m3
     generated = (batch.outputs["CO2(g)"] + batch.outputs["CO2(aq)"] + batch.purged_mol) * mm["CO2(g)"]
     ethanol_kg = batch.outputs["C2H5OH(aq)"] * mm["C2H5OH(aq)"]
-    wash_kg = sum(batch.outputs[n] * mm[n] for n in ("C2H5OH(aq)", "C6H12O6(aq)", "CO2(aq)", "H2O(l)"))
+    wash_kg = (sum(batch.outputs[n] * mm[n] for n in ("C2H5OH(aq)", "C6H12O6(aq)", "CO2(aq)", "H2O(l)"))
+               + bought_kg - sugar_kg)
     y_c, y_w = batch.outputs["CO2(g)"], batch.outputs["H2O(g)"]
     fractions = {"CO2": y_c / (y_c + y_w), "H2O": y_w / (y_c + y_w), "N2": 0.0, "O2": 0.0}
     hours = batch.days * 24.0
@@ -171,7 +185,8 @@ def compute(request: RouteRequest) -> RouteResult:
                     "remove it. The first gas out is the air of the headspace: purge it before use.")
     notes = [
         f"Gay-Lussac: C6H12O6 -> 2 C2H5OH + 2 CO2 at {opt['efficiency']:.0%} of the theoretical yield; "
-        f"{sugar_kg:.3g} kg {label} in {must_l:.4g} L of must ({opt['sugar_concentration']:.0f} g/L).",
+        f"{sugar_kg:.3g} kg {label if opt['sugar'] != 'malt-extract' else 'fermentable sugar'} in "
+        f"{must_l:.4g} L of must ({opt['sugar_concentration']:.0f} g/L).",
         f"The batch gives off {-batch.heat_kj:.4g} kJ over {batch.days:.1f} days: about "
         f"{watts_per_l:.2g} W per litre of must: small per hour, so an open or thin-walled vessel "
         "loses most of it to the room; an insulated one warms and ferments faster.",
@@ -188,7 +203,11 @@ def compute(request: RouteRequest) -> RouteResult:
                   "wash for distilling or to a drain where local rules allow"),
         Byproduct("yeast lees", "biomass", yeast_kg, "settled yeast; compost it"),
     )
-    reagents = (Reagent(label, sugar_sp.split("(")[0], sugar_kg, sugar_kg, None, price_key),
+    if share < 1.0:
+        notes.append(f"{bought_kg:.3g} kg of dry malt extract holds {sugar_kg:.3g} kg fermentable sugar "
+                     f"({share:.0%}, as glucose; common practice); the rest stays in the wash.")
+    formula = "malt extract" if opt["sugar"] == "malt-extract" else sugar_sp.split("(")[0]
+    reagents = (Reagent(label, formula, bought_kg, sugar_kg, None, price_key),
                 Reagent("dry yeast", "yeast", yeast_kg, yeast_kg, None, "yeast"))
     uses = (Use("water for the must", batch.water_kg / 1000.0, "volume_m3", "water"),)
     if opt["byproduct"] == "yes":

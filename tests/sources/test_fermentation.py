@@ -31,7 +31,7 @@ def test_is_a_route():
     assert isinstance(ROUTE, Route) and ROUTE.id == "fermentation"
 
 
-@given(sugar=st.sampled_from(["glucose", "sucrose", "maltose"]), kg=st.floats(0.01, 1000.0),
+@given(sugar=st.sampled_from(["glucose", "sucrose", "malt-extract"]), kg=st.floats(0.01, 1000.0),
        eff=st.floats(0.5, 1.0), conc=st.floats(40.0, 350.0), t_c=st.floats(5.0, 40.0))
 def test_element_balance(sugar, kg, eff, conc, t_c):
     # Conservation of elements: exact, to 1e-9 relative.

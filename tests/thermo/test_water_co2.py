@@ -112,3 +112,10 @@ def test_plus_0_01_degc_is_not_a_frost_point():
     assert not water.moisture_from_dew_point(273.15 + 0.01).over_ice
     assert not water_co2.saturated_water_in_co2(273.15 + 0.01, 101325.0).over_ice
     assert water_co2.saturated_water_in_co2(273.15, 101325.0).over_ice
+
+
+def test_dryer_names_a_liquid_inlet():
+    # CoolProp (Span & Wagner 1996): CO2 at 20 degC and 60 bar is liquid (p_sat 57.3 bar).
+    r = size_dryer(DryerInput(co2_flow_kg_s=2.0 / 86400, inlet_temperature_k=293.15,
+                              desiccant="molecular-sieve-13x", inlet_pressure_pa=60e5))
+    assert any("CO2 is liquid" in w for w in r.warnings)

@@ -188,7 +188,7 @@ def test_batch_json_has_the_issue_keys_for_every_route(capsys, route_id):
 
 @pytest.mark.parametrize("route_id, options", [
     ("acid-carbonate", ["--option", "acid=citric", "--option", "strength=as sold"]),
-    ("fermentation", ["--option", "sugar=maltose"]),
+    ("fermentation", ["--option", "sugar=malt-extract"]),
     ("combustion", ["--option", "fuel=butane"]),
     ("purchase", []),
 ])

@@ -78,3 +78,25 @@ def test_bad_input_is_one_line_with_exit_status_2(capsys, extra, option):
     assert main(argv + ["--json"]) == 2
     err = capsys.readouterr().err.strip()
     assert len(err.splitlines()) == 1 and option in err
+
+
+def test_dryer_prices_from_the_users_price_book(capsys, monkeypatch, tmp_path):
+    # The dryer command costs the charge and the regeneration from the user's book, not a list of
+    # its own: doubling both prices doubles the cost per kg (cost is linear in the prices).
+    argv = ["dryer", "--flow", "2 kg/day", "--inlet-temperature", "25 degC", "--desiccant",
+            "silica-gel", "--cycle", "8 h", "--json"]
+
+    def cost(text):
+        book = tmp_path / "prices.toml"
+        book.write_text(text, encoding="utf-8")
+        monkeypatch.setattr("co2routes.sources.prices.user_book_path", lambda: book)
+        assert main(argv) == 0
+        return json.loads(capsys.readouterr().out)
+
+    one = cost('currency = "GBP"\n[prices]\nsilica-gel = "3 / kg"\nelectricity = "0.2 / kWh"\n')
+    two = cost('currency = "GBP"\n[prices]\nsilica-gel = "6 / kg"\nelectricity = "0.4 / kWh"\n')
+    assert two["cost_per_kg_co2"] == pytest.approx(2 * one["cost_per_kg_co2"], rel=1e-9)
+    assert any("GBP" in w and "price book" in w for w in one["warnings"])
+    none = cost('currency = "GBP"\n[prices]\nelectricity = "0.2 / kWh"\n')
+    assert none["cost_per_kg_co2"] is None
+    assert any("silica-gel" in w and "Cost unknown" in w for w in none["warnings"])

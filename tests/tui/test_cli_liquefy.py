@@ -69,7 +69,8 @@ def test_table_output(capsys):
 @pytest.mark.parametrize("extra, option", [
     (["--condensing-temperature", "35 degC"], "--condensing-temperature"),   # above critical
     (["--condensing-temperature", "-60 degC"], "--condensing-temperature"),  # below triple point
-    (["--condensing-temperature", "0 degC", "--stages", "1"], "--stages"),   # ratio 34 > 6
+    (["--condensing-temperature", "0 degC", "--intercool-temperature", "500 degC"],
+     "--intercool-temperature"),                                             # a cooler cannot heat
     (["--condensing-temperature", "0 degC", "--stages", "two"], "--stages"),
     (["--condensing-temperature", "0 degC", "--efficiency", "0"], "--efficiency"),
     (["--condensing-temperature", "0 degC", "--efficiency", "120 %"], "--efficiency"),
@@ -88,3 +89,18 @@ def test_above_critical_explains(capsys):
     assert main([*BASE, "--condensing-temperature", "32 degC"]) == 2
     err = capsys.readouterr().err
     assert "critical temperature" in err and "31.0 degC" in err
+
+
+def test_one_stage_is_answered_with_its_discharge_temperature(capsys):
+    # A question about a state, not a plan: one stage from 1 atm to 34.9 bar (ratio 34) is
+    # computed and warned about. Ideal-gas estimate of its discharge at eta 0.7 with gamma 1.22-1.29
+    # (NIST WebBook cp of CO2 at 300-700 K): T2 = T1 + T1 (r^((g-1)/g) - 1) / eta = 660-800 K.
+    a = run_json(capsys, *BASE, "--condensing-temperature", "0 degC", "--stages", "1")
+    assert a["stages"] == 1
+    assert 640.0 < a["discharge_temperature_k"] < 820.0
+    assert any("ratio of 34" in w and "discharge would reach" in w for w in a["warnings"])
+
+
+def test_intercooler_above_the_inlet_is_warned(capsys):
+    a = run_json(capsys, *BASE, "--condensing-temperature", "0 degC", "--intercool-temperature", "40 degC")
+    assert any("warmer than the gas drawn in" in w for w in a["warnings"])

@@ -56,3 +56,11 @@ def test_store_saturation_snow_sweep(capsys, t_c):
     for p in PRESSURES_BAR:
         assert _code(capsys, "saturation", "--pressure", f"{p} bar") in (0, 2)
         assert _code(capsys, "moisture", "--temperature", f"{t_c} degC", "--pressure", f"{p} bar") in (0, 2)
+
+
+@pytest.mark.parametrize("t_c", (28.0, 30.9, 31.1))
+def test_dryer_near_critical(capsys, t_c):
+    for p in (60.0, 73.5, 80.0):
+        assert _code(capsys, "dryer", "--flow", "2 kg/day", "--inlet-temperature", f"{t_c} degC",
+                     "--inlet-pressure", f"{p} bar", "--desiccant", "molecular-sieve-13x",
+                     "--cycle", "8 h") in (0, 2)

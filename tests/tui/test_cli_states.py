@@ -203,3 +203,17 @@ def test_moisture_at_plus_0_01_degc_is_a_dew_point(capsys):
     answer = run_json(capsys, "moisture", "--dew-point", "0.01 degC")
     assert answer["frost_point"] is False
     assert not any("frost point" in w for w in answer["warnings"])
+
+
+def test_store_names_supercritical_above_the_critical_temperature(capsys):
+    # Span & Wagner (1996): critical point 31.0 degC, 73.77 bar; at 35 degC and 60 bar there is
+    # no liquid at any pressure and the fluid is dense (about 190 kg/m3): supercritical, not gas.
+    answer = run_json(capsys, "store", "--volume", "10 L", "--pressure", "60 bar", "--temperature", "35 degC")
+    assert answer["phase"] == "supercritical"
+
+
+def test_store_warns_near_the_critical_point(capsys):
+    answer = run_json(capsys, "store", "--volume", "10 L", "--pressure", "72 bar", "--temperature", "30 degC")
+    assert any("critical point" in w for w in answer["warnings"])
+    far = run_json(capsys, "store", "--volume", "10 L", "--pressure", "20 bar", "--temperature", "20 degC")
+    assert not any("critical point" in w for w in far["warnings"])

@@ -112,6 +112,31 @@ def _ppmv(text: str) -> float:
     return parse_positive(value, "--target-ppmv", "fraction")
 
 
+def _prices(kwargs: dict, desiccant: str) -> tuple[str, bool]:
+    """Put the price book's desiccant and electricity prices into ``kwargs``; return the sentence
+    saying where the cost comes from and whether it is known.
+
+    The book is the user's own (:func:`co2routes.sources.prices.load_book`), else the invented
+    demo book; the regeneration heater is priced as electricity, as in the comparison
+    (:mod:`co2routes.sources.conditioning`).
+    """
+    from co2routes.sources.prices import load_book, user_book_path
+
+    book = load_book()
+    where = (f"your price book ({user_book_path()})" if user_book_path().exists()
+             else "the invented demo price book")
+    charge, power = book.get(desiccant), book.get("electricity")
+    missing = [name for name, price, per in ((desiccant, charge, "mass"), ("electricity", power, "energy"))
+               if price is None or price.per != per]
+    if missing:
+        return (f"Cost unknown: {where} has no price for {' or '.join(missing)} (per kg for the "
+                "desiccant, per kWh for electricity).", False)
+    kwargs["price_per_kg"] = charge.amount
+    kwargs["energy_price_per_kwh"] = power.amount * 3.6e6
+    return (f"Costs use {where} in {book.currency}: {desiccant} and electricity for regeneration.",
+            True)
+
+
 def run(args: argparse.Namespace) -> dict:
     """Size the bed and return the JSON answer."""
     from co2routes.thermo.dryer import DryerInput, breakthrough_curve, size_dryer
@@ -139,6 +164,7 @@ def run(args: argparse.Namespace) -> dict:
                                                       "--length-to-diameter", "fraction")
     if args.particle_size is not None:
         kwargs["particle_diameter_m"] = parse_positive(args.particle_size, "--particle-size", "length")
+    book_note = _prices(kwargs, args.desiccant)
     try:
         co2 = _flow(args.flow, kwargs)
         inp = DryerInput(co2_flow_kg_s=co2, **kwargs)
@@ -180,10 +206,9 @@ def run(args: argparse.Namespace) -> dict:
         "outlet_dew_point_k": result.outlet_dew_point_k,
         "reaches_target": result.reaches_target,
         "suggested_desiccant": result.suggested_desiccant,
-        "cost_per_kg_co2": result.cost_per_kg_co2,
+        "cost_per_kg_co2": result.cost_per_kg_co2 if book_note[1] else None,
         "breakthrough_curve": [{"time_h": c.time_s / 3600.0, "outlet_ppmv": c.outlet_ppmv}
                                for c in curve],
-        "warnings": list(result.warnings) + [
-            "Costs use invented demo prices (desiccant and regeneration energy) in no currency."],
+        "warnings": list(result.warnings) + [book_note[0]],
         "cautions": list(result.cautions),
     }

@@ -59,7 +59,7 @@ def _kj(value: float) -> float:
 
 def run(args: argparse.Namespace) -> dict:
     """The liquefaction plan as the JSON answer."""
-    from co2routes.thermo import cautions, compression
+    from co2routes.thermo import cautions, compression, liquefaction
     from co2routes.thermo.errors import InputError
     from co2routes.thermo.units import parse, parse_positive
 
@@ -76,10 +76,10 @@ def run(args: argparse.Namespace) -> dict:
         args.volumetric_efficiency, "--volumetric-efficiency", "fraction")
     mass = None if args.mass is None else parse_positive(args.mass, "--mass", "mass")
     try:
-        result = compression.liquefy(p_in, t_in, t_cond, stages=stages, efficiency=eta,
-                                     intercool_temperature_k=t_ic, displacement_m3_s=disp,
-                                     volumetric_efficiency=eta_v, mass_kg=mass)
-        tradeoff = compression.cooling_tradeoff(
+        result = liquefaction.liquefy(p_in, t_in, t_cond, stages=stages, efficiency=eta,
+                                      intercool_temperature_k=t_ic, displacement_m3_s=disp,
+                                      volumetric_efficiency=eta_v, mass_kg=mass, plan=False)
+        tradeoff = liquefaction.cooling_tradeoff(
             p_in, t_in, temperatures_k=compression.TRADEOFF_TEMPERATURES_K + (t_cond,),
             stages=stages, efficiency=eta, intercool_temperature_k=t_ic)
     except InputError as err:

@@ -23,8 +23,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
     parser.add_argument("--rated-pressure", metavar="P",
                         help="the vessel's rated (working) pressure, e.g. '1800 psi'; warn above it")
     parser.add_argument("--force", action="store_true",
-                        help="accept a charge over the 0.68 kg/L filling ratio (dangerous: the "
-                             "cylinder goes liquid-full and its pressure climbs steeply)")
+                        help="kept for scripts: a charge over the 0.68 kg/L filling ratio is "
+                             "answered with a warning either way (the cylinder goes liquid-full and "
+                             "its pressure climbs steeply); plans still refuse it")
     curve = parser.add_argument_group("hot-day curve")
     curve.add_argument("--hot-day-curve", action="store_true",
                        help="add the pressure from -10 degC up to the hot-day temperature, with the "
@@ -80,7 +81,7 @@ def run(args: argparse.Namespace) -> dict:
     state = vessel_state(args)
     warnings = list(state.warnings)
     if args.mass is not None:
-        warnings.extend(_charge_check(state, args.force))
+        warnings.extend(_charge_check(state))
     if state.fill_density_kg_l > FILLING_DENSITY_LIMIT_KG_L and not any(
             "filling ratio" in w for w in warnings):  # a forced charge has said it already
         warnings.append(
@@ -90,6 +91,8 @@ def run(args: argparse.Namespace) -> dict:
         warnings.append(
             f"Pressure {state.pressure_pa / 1e5:.1f} bar is above the rated pressure "
             f"{rated / 1e5:.1f} bar of this vessel.")
+    phase = _phase_name(state)
+    warnings.extend(_near_critical(state))
     relief = None if args.relief_pressure is None else parse_positive(
         args.relief_pressure, "--relief-pressure", "pressure")
     if relief is not None and state.pressure_pa >= relief:
@@ -105,7 +108,7 @@ def run(args: argparse.Namespace) -> dict:
         "temperature_k": state.temperature_k,
         "co2_mass_kg": state.co2_mass_kg,
         "pressure_pa": state.pressure_pa,
-        "phase": state.phase,
+        "phase": phase,
         "fill_density_kg_l": state.fill_density_kg_l,
         "liquid_volume_fraction": state.liquid_volume_fraction,
         "max_safe_charge_kg": FILLING_DENSITY_LIMIT_KG_L * state.volume_m3 * 1000.0,
@@ -126,17 +129,50 @@ def run(args: argparse.Namespace) -> dict:
     return answer
 
 
-def _charge_check(state, force: bool) -> list[str]:
-    """Refuse a charge over the filling ratio unless ``--force`` (co2routes.thermo.storage.check_charge)."""
+def _charge_check(state) -> list[str]:
+    """The danger of a charge over the filling ratio, as a warning: ``store`` answers a question
+    about a state (what pressure does this cylinder reach?); plans refuse the overfill
+    (:func:`co2routes.thermo.storage.check_charge` without ``force``)."""
     from co2routes.thermo import storage
-    from co2routes.thermo.errors import InputError
 
-    try:
-        return list(storage.check_charge(state.volume_m3, state.co2_mass_kg, force=force,
-                                         filling_ratio_kg_per_l=FILLING_DENSITY_LIMIT_KG_L))
-    except InputError as err:
-        raise InputError("--mass", err.allowed.replace("Refused unless forced,", "Add --force only"),
-                         err.got) from None
+    return list(storage.check_charge(state.volume_m3, state.co2_mass_kg, force=True,
+                                     filling_ratio_kg_per_l=FILLING_DENSITY_LIMIT_KG_L))
+
+
+#: Above the critical temperature and above this share of the critical pressure the fluid is
+#: called supercritical: dense and far from an ideal gas (below it, a gas).
+SUPERCRITICAL_PRESSURE_SHARE = 0.5
+
+
+def _phase_name(state) -> str:
+    """The phase as ``store`` names it: above the critical temperature (31.0 degC) there is no
+    liquid at any pressure, and a dense fluid there (above half the critical pressure) is called
+    supercritical, not gas (Span & Wagner 1996 critical point 304.128 K, 7.3773 MPa).
+
+    >>> from types import SimpleNamespace as S
+    >>> _phase_name(S(phase="gas", temperature_k=310.0, pressure_pa=60e5))
+    'supercritical'
+    >>> _phase_name(S(phase="gas", temperature_k=310.0, pressure_pa=1e5))
+    'gas'
+    """
+    from co2routes.thermo import co2
+
+    if (state.temperature_k >= co2.CRITICAL_TEMPERATURE_K
+            and state.pressure_pa >= SUPERCRITICAL_PRESSURE_SHARE * co2.CRITICAL_PRESSURE_PA):
+        return "supercritical"
+    return state.phase
+
+
+def _near_critical(state) -> list[str]:
+    """A warning within 3 K and 10 bar of the critical point (31.0 degC, 73.8 bar)."""
+    from co2routes.thermo import co2
+
+    if (abs(state.temperature_k - co2.CRITICAL_TEMPERATURE_K) <= 3.0
+            and abs(state.pressure_pa - co2.CRITICAL_PRESSURE_PA) <= 10e5):
+        return ["Near the critical point of CO2 (31.0 degC, 73.8 bar): a small change of "
+                "temperature moves the pressure and density steeply, and the figures are least "
+                "certain here; keep the cylinder well below 31 degC or well above it."]
+    return []
 
 
 def _hot_day(args: argparse.Namespace, state, rated: float | None, warnings: list[str]) -> dict:
