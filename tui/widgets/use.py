@@ -18,6 +18,13 @@ from co2routes.tui.widgets import css_of
 
 #: group title of the fields every use shares (and of the kind)
 GROUP = "Demand from the use"
+#: hints of the inputs several uses share (each use keeps its own default)
+SHARED_HINTS = {
+    "volume": "L, m**3: the house's air, the wort, or the drink",
+    "headspace": "%: of the fermenter's liquid, or of each package",
+    "every": "time between runs: brews, batches, boxes",
+    "atmosphere": "atm, bar: default the site's",
+}
 
 
 def use_fields() -> tuple[Field, ...]:
@@ -27,8 +34,7 @@ def use_fields() -> tuple[Field, ...]:
     for inputs in specs.values():
         for spec in inputs:
             counts[spec.key] = counts.get(spec.key, 0) + 1
-    out = [Field(("use", "kind"), "use", " | ".join(KINDS) + "; sets the demand (clear demand)",
-                 choices=tuple(KINDS), group=GROUP)]
+    out = [Field(("use", "kind"), "use (sets the demand)", " | ".join(KINDS), choices=tuple(KINDS), group=GROUP)]
     shared = {}
     for kind, inputs in specs.items():
         for spec in inputs:
@@ -37,8 +43,8 @@ def use_fields() -> tuple[Field, ...]:
                 continue
             out.append(Field(("use", spec.key), spec.label, spec.help, default=spec.default or "",
                              choices=spec.choices, group=f"Use: {kind}"))
-    out[1:1] = [Field(("use", key), key.replace("_", " "), f"{spec.help} (each use its own default)",
-                      group=GROUP) for key, spec in shared.items()]
+    out[1:1] = [Field(("use", key), key.replace("_", " "), SHARED_HINTS.get(key, spec.help), group=GROUP)
+                for key, spec in shared.items()]
     return tuple(out)
 
 
@@ -64,6 +70,8 @@ class UseBalance(Static):
             text.append(f"{label}: {format_value(key, value)}\n")
         for line in use.warnings:
             text.append(f"⚠ {line}\n", style="bold")
+        for line in use.cautions:
+            text.append(f"caution: {line}\n", style="italic")
         self.update(text)
 
 
