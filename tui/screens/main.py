@@ -28,7 +28,7 @@ from co2routes.tui.session import Opened, edited, value_at
 from co2routes.tui.widgets.detail import TABS, CautionPanel, RouteDetail
 from co2routes.tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
 from co2routes.tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
-from co2routes.tui.widgets.use import add_use_panel, show_use
+from co2routes.tui.widgets.use import add_use_panel, show_use, sync_use_fields
 
 
 class MainScreen(Filing, Working, WhatIf, Screen):
@@ -235,6 +235,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         if new == self.document:
             return
         self.document = new
+        sync_use_fields(self)
         self.dirty = True
         self.notice = None
         self._title()
