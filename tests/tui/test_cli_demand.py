@@ -3,25 +3,10 @@ against ``snow``'s box figures, and ``compare`` on a scenario whose demand comes
 
 from __future__ import annotations
 
-import json
-
 import pytest
 
 from co2routes.tui.cli import main
-
-
-def run_json(capsys, *argv):
-    code = main([*argv, "--json"])
-    captured = capsys.readouterr()
-    assert code == 0, captured.err
-    return json.loads(captured.out)
-
-
-def fails(capsys, *argv):
-    code = main([*argv, "--json"])
-    err = capsys.readouterr().err
-    assert code == 2 and err.count("\n") == 1, err
-    return err
+from test_cli_store_snow_more import fails, run_json  # the same JSON and one-line-error helpers
 
 
 HOUSE = ["demand", "greenhouse", "--floor-area", "150 m**2", "--mean-height", "3 m"]

@@ -162,7 +162,9 @@ class Filing:
             return comparison_markdown(comparison)
         if fmt == "csv":
             return comparison_csv(comparison)
-        return json_text(comparison_record(comparison))
+        from co2routes.sources.uses import demand_fields
+
+        return json_text({**comparison_record(comparison), **demand_fields(self.outcome.scenario)})
 
     def recipe_text(self, fmt: str) -> str:
         """The chosen route's batch as ``batch --markdown/--csv/--json`` prints it."""

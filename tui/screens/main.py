@@ -30,6 +30,7 @@ from co2routes.tui.session import Opened, edited, value_at
 from co2routes.tui.widgets.detail import TABS, CautionPanel, RouteDetail
 from co2routes.tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
 from co2routes.tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
+from co2routes.tui.widgets.use import add_use_panel, show_use, sync_use_fields
 
 
 class MainScreen(Filing, Working, WhatIf, Screen):
@@ -96,6 +97,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
     def on_mount(self) -> None:
         form = self.query_one(ScenarioForm)
         form.add_fields(BASE_FIELDS, self.document)
+        add_use_panel(form, self.document)
         self._title()
         self.query_one("#busy").display = False
         self.recompute(self.document, self.generation, None)
@@ -142,6 +144,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self.outcome = outcome
         self.breakthrough = {}
         self.query_one(ScenarioForm).clear_marks()
+        show_use(self, outcome.scenario)
         comparison = outcome.comparison
         table = self.query_one(RankingTable)
         table.show(comparison.rows)
@@ -232,6 +235,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         if new == self.document:
             return
         self.document = new
+        sync_use_fields(self)
         self.dirty = True
         self.notice = None
         self._title()
