@@ -16,7 +16,7 @@ from dataclasses import dataclass
 from typing import Any, Callable, Mapping, Sequence
 
 from co2routes.sources.base import Route, RouteRequest, RouteResult, Use
-from co2routes.sources.guard import failure_line, option_table_field, route_options, run_route
+from co2routes.sources.guard import failure_line, named_in, option_table_field, route_options, run_route
 from co2routes.sources.prices import cost_lines
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import CRITERIA, Scenario
@@ -155,7 +155,7 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
             from co2routes.thermo.errors import InputError
 
             if isinstance(err, InputError):
-                raise
+                raise named_in(scenario, err) from None
             failures.append(failure_line(route, err))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
                       dict(scenario.weights), rank(results, scenario.weights), tuple(failures))

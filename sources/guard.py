@@ -111,6 +111,24 @@ def route_options(route: Route, given: Mapping[str, Any], scenario: Any) -> dict
         raise InputError(f"{where}: options.{route.id}.{key}", err.allowed, err.got) from None
 
 
+def named_in(scenario: Any, err: InputError) -> InputError:
+    """``err`` with its field placed in the scenario file (``FILE, line N: delivery.stages``) when
+    it names a key of a scenario table bare, as the delivery and dryer planning do.
+
+    >>> from types import SimpleNamespace
+    >>> s = SimpleNamespace(source="s.toml", text='demand = "1 kg"\\n[delivery]\\nstages = 9\\n')
+    >>> str(named_in(s, InputError("delivery.stages", "must be fewer")))
+    's.toml, line 3: delivery.stages: must be fewer'
+    """
+    from co2routes.sources.scenario import _Where
+
+    section, _, key = err.field.partition(".")
+    if section not in ("site", "dryer", "delivery", "weights", "prices") or not key or " " in err.field:
+        return err
+    where = _Where(getattr(scenario, "source", "scenario"), getattr(scenario, "text", None))
+    return InputError(where(section, key), err.allowed, err.got)
+
+
 def option_table_field(scenario: Any, route_id: str) -> str:
     """The error field of a whole ``[options.ROUTE]`` table: file, line and table name."""
     text = getattr(scenario, "text", None) or ""

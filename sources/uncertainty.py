@@ -34,7 +34,7 @@ import numpy as np
 from co2routes.sources.base import Route
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
-from co2routes.sources.guard import RouteFault, failure_line
+from co2routes.sources.guard import RouteFault, failure_line, named_in
 from co2routes.sources.whatif import SCENARIO_INPUTS, Distribution, cost_model, evaluate_at, price_keys, targets
 from co2routes.thermo.errors import InputError
 
@@ -167,8 +167,8 @@ def uncertainty(scenario: Scenario, distributions: Mapping[str, Distribution] | 
                     table[:, g] = _line_basis(at, model, prices, book) * (model.basis_kg / at.basis_kg)
                     step()
                 curves.append((name, nodes, table))
-        except InputError:
-            raise
+        except InputError as err:
+            raise named_in(scenario, err) from None
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
             failures.append(failure_line(route, err))
             continue
