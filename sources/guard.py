@@ -57,7 +57,8 @@ def _bad_number(value: Any, low: float | None = 0.0) -> bool:
 
 def check_result(route_id: str, result: Any) -> RouteResult:
     """``result`` if it is a :class:`RouteResult` whose amounts are finite and not negative
-    (heat may be negative; CO2 must be above zero), else :class:`RouteFault` naming the figure.
+    (heat may be negative, and so may a use: a credit such as heat put to use; CO2 must be above
+    zero), else :class:`RouteFault` naming the figure.
 
     >>> check_result("demo", None)
     Traceback (most recent call last):
@@ -80,7 +81,7 @@ def check_result(route_id: str, result: Any) -> RouteResult:
     figures += [(f"reagent {r.name} pure_mass_kg", r.pure_mass_kg, 0.0) for r in result.reagents]
     figures += [(f"reagent {r.name} volume_l", r.volume_l, 0.0) for r in result.reagents if r.volume_l is not None]
     figures += [(f"byproduct {b.name} mass_kg", b.mass_kg, 0.0) for b in result.byproducts]
-    figures += [(f"use {u.name} amount", u.amount, 0.0) for u in result.uses]
+    figures += [(f"use {u.name} amount", u.amount, None) for u in result.uses]  # < 0: a credit
     figures += [(f"raw_gas {k}", v, 0.0) for k, v in result.raw_gas.mole_fractions.items()]
     if _bad_number(result.co2_kg) or not result.co2_kg > 0:
         raise RouteFault(route_id, f"returned co2_kg = {result.co2_kg!r}; it must be a finite number above zero")
