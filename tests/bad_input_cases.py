@@ -145,6 +145,7 @@ SCENARIO_CASES = [
     ("binary-file", ["compare", "{d}/s.toml"], {"s.toml": b"\xff\xfe\x00\x01binary"}, 2, "s.toml"),
     ("empty-file", ["compare", "{d}/s.toml"], {"s.toml": ""}, 2, "demand"),
     ("huge-file", ["compare", "{d}/s.toml"], {"s.toml": GOOD + "#" * 1_100_000 + "\n"}, 2, "s.toml"),
+    ("device-file", ["compare", "/dev/zero"], {}, 2, "/dev/zero: is not a regular file"),
     ("missing-file", ["compare", "{d}/nothere.toml"], {}, 2, "nothere.toml"),
     ("empty-name", ["compare", ""], {}, 2, "no file name"),
     ("folder", ["compare", "{d}"], {}, 2, "is a folder"),
