@@ -57,7 +57,8 @@ def _bad_number(value: Any, low: float | None = 0.0) -> bool:
 
 def check_result(route_id: str, result: Any) -> RouteResult:
     """``result`` if it is a :class:`RouteResult` whose amounts are finite and not negative
-    (heat may be negative; CO2 must be above zero), else :class:`RouteFault` naming the figure.
+    (heat may be negative, and so may a use: a credit such as heat put to use; CO2 must be above
+    zero), else :class:`RouteFault` naming the figure.
 
     >>> check_result("demo", None)
     Traceback (most recent call last):
@@ -122,6 +123,24 @@ def route_options(route: Route, given: Mapping[str, Any], scenario: Any) -> dict
         line = option_lines(getattr(scenario, "text", None), f"options.{route.id}").get(key)
         where = f"{source}, line {line}" if line else source
         raise InputError(f"{where}: options.{route.id}.{key}", err.allowed, err.got) from None
+
+
+def named_in(scenario: Any, err: InputError) -> InputError:
+    """``err`` with its field placed in the scenario file (``FILE, line N: delivery.stages``) when
+    it names a key of a scenario table bare, as the delivery and dryer planning do.
+
+    >>> from types import SimpleNamespace
+    >>> s = SimpleNamespace(source="s.toml", text='demand = "1 kg"\\n[delivery]\\nstages = 9\\n')
+    >>> str(named_in(s, InputError("delivery.stages", "must be fewer")))
+    's.toml, line 3: delivery.stages: must be fewer'
+    """
+    from co2routes.sources.scenario import _Where
+
+    section, _, key = err.field.partition(".")
+    if section not in ("site", "dryer", "delivery", "weights", "prices") or not key or " " in err.field:
+        return err
+    where = _Where(getattr(scenario, "source", "scenario"), getattr(scenario, "text", None))
+    return InputError(where(section, key), err.allowed, err.got)
 
 
 def option_table_field(scenario: Any, route_id: str) -> str:

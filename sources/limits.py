@@ -50,6 +50,8 @@ def read_text(path: Path, what: str) -> str:
         path = Path(path).expanduser()
         if path.is_dir():
             raise InputError(str(path), f"is a folder, not a {what}")
+        if path.exists() and not path.is_file():  # a pipe or a device could keep us waiting
+            raise InputError(str(path), f"is not a regular file; a {what} is a TOML text file")
         with open(path, "rb") as handle:
             data = handle.read(MAX_FILE_BYTES + 1)
     except FileNotFoundError:

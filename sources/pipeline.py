@@ -14,7 +14,8 @@ from dataclasses import dataclass, field
 from typing import Any, Mapping, Sequence
 
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use
-from co2routes.sources.guard import check_total, failure_line, option_table_field, route_options, run_route
+from co2routes.sources.guard import (check_total, failure_line, named_in, option_table_field, route_options,
+                                      run_route)
 from co2routes.sources.plan import NotApplicable, PlannedRoute
 from co2routes.sources.prices import cost_lines, missing_prices, route_prices
 from co2routes.sources.rank import RouteRow, rank
@@ -118,8 +119,8 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
             results.append(evaluate(route, scenario))
         except RouteRefused as err:
             refused.append(NotApplicable(route.id, route.label, str(err).removeprefix(f"route {route.id}: ")))
-        except InputError:
-            raise
+        except InputError as err:
+            raise named_in(scenario, err) from None
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
             failures.append(failure_line(route, err))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,

@@ -20,7 +20,7 @@ from typing import Any, Mapping, Sequence
 from co2routes.sources.base import Route
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
-from co2routes.sources.guard import failure_line
+from co2routes.sources.guard import failure_line, named_in
 from co2routes.sources.whatif import (SCENARIO_INPUTS, Distribution, Target, cost_model, evaluate_at, price_unit,
                             targets)
 from co2routes.sources.pipeline import RouteRefused
@@ -134,8 +134,8 @@ def sensitivity(scenario: Scenario, distributions: Mapping[str, Distribution] | 
             out.append(route_sensitivity(route, scenario, distributions))
         except RouteRefused as err:
             failures.append(f"route {route.id!r} not applicable: {str(err).removeprefix(f'route {route.id}: ')}")
-        except InputError:
-            raise
+        except InputError as err:
+            raise named_in(scenario, err) from None
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
             failures.append(failure_line(route, err))
     return Sensitivity(scenario.name, scenario.prices.currency, tuple(out), tuple(failures))

@@ -34,7 +34,7 @@ import numpy as np
 from co2routes.sources.base import Route
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
-from co2routes.sources.guard import RouteFault, failure_line
+from co2routes.sources.guard import RouteFault, failure_line, named_in
 from co2routes.sources.whatif import SCENARIO_INPUTS, Distribution, cost_model, evaluate_at, price_keys, targets
 from co2routes.sources.pipeline import RouteRefused
 from co2routes.thermo.errors import InputError
@@ -170,8 +170,8 @@ def uncertainty(scenario: Scenario, distributions: Mapping[str, Distribution] | 
                 curves.append((name, nodes, table))
         except RouteRefused as err:
             failures.append(f"route {route.id!r} not applicable: {str(err).removeprefix(f'route {route.id}: ')}")
-        except InputError:
-            raise
+        except InputError as err:
+            raise named_in(scenario, err) from None
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
             failures.append(failure_line(route, err))
             continue

@@ -135,3 +135,36 @@ def test_the_relief_setting_is_checked_without_the_hot_day_curve(tmp_path, capsy
     code, out, err, _ = run_case(["store", "--volume", "1 L", "--mass", "0.6 kg", "--temperature", "20 degC",
                                   "--relief-pressure", "10 bar"], {}, tmp_path, capsys)
     assert code == 0 and "relief" in out.lower() and "would open" in out
+
+
+@pytest.mark.parametrize("text, dimension, si", [
+    # the forms people type stay accepted; factors exact by definition (NIST SP 811, Appendix B)
+    ("160 psi", "pressure", 160 * 6894.757293168361),
+    ("0.5 W/m**2/K", "heat_transfer_coefficient", 0.5),
+    ("0.5 W/(m**2 K)", "heat_transfer_coefficient", 0.5),
+    ("2 m^3/h", "volume_flow", 2 / 3600.0),
+    ("1.1 kg/L", "density", 1100.0),
+    ("20°C", "temperature", 293.15),
+    ("-4degF", "temperature", 253.15),
+    ("5 delta_degC", "temperature_difference", 5.0),
+    ("425 ppmv", "fraction", 425e-6),
+    ("+2e-3 kg", "mass", 0.002),
+    (".5 kg", "mass", 0.5),
+    ("1.5kg", "mass", 1.5),
+])
+def test_ordinary_quantities_pass_the_text_checks(text, dimension, si):
+    from co2routes.thermo.units import parse
+
+    assert parse(text, "field", dimension) == pytest.approx(si, rel=1e-12)  # exact conversions
+
+
+@pytest.mark.parametrize("text", ["9**9**9 K", "10**400 K", "(9**9)**9 K", "K**99", "2 degC * 3", "2 * 3 K",
+                                  "3 K + 2 K", "1 / 2 K", "1" * 81, "1" * 25 + " K", "1e1234 K"])
+def test_arithmetic_and_oversized_numbers_are_refused_at_once(text):
+    from co2routes.thermo.errors import InputError
+    from co2routes.thermo.units import parse
+
+    start = time.perf_counter()
+    with pytest.raises(InputError, match="^t: "):
+        parse(text, "t", "temperature")
+    assert time.perf_counter() - start < 1.0

@@ -143,3 +143,24 @@ def test_compare_on_a_fuzzed_scenario_file_exits_0_or_2(pairs, tmp_path_factory,
     code, out = _run(["compare", str(folder / "s.toml"), "--json"], capsys)
     if code == 0:
         assert_finite(json.loads(out))
+
+
+SHORT = st.one_of(st.text(max_size=12), st.integers(-5, 300).map(str), PIECES)
+CHOICE_ARGS = {
+    "compare": lambda v: ["compare", "--weight", v, "--json"],
+    "batch": lambda v: ["batch", "purchase", "--option", v, "--json"],
+    "sensitivity": lambda v: ["sensitivity", "--route", "purchase", "--top", v, "--json"],
+    "uncertainty": lambda v: ["uncertainty", "--route", "purchase", "--samples", v, "--seed", "1", "--json"],
+    "uncertainty-seed": lambda v: ["uncertainty", "--route", "purchase", "--samples", "20", "--seed", v, "--json"],
+    "routes": lambda v: ["batch", v, "--json"],
+    "reaction": lambda v: ["reaction", v, "--json"],
+}
+
+
+@settings(max_examples=8, deadline=None, suppress_health_check=list(HealthCheck))
+@given(value=SHORT)
+@pytest.mark.parametrize("which", sorted(CHOICE_ARGS))
+def test_the_other_options_exit_0_or_2_with_finite_json(which, value, capsys):
+    code, out = _run(CHOICE_ARGS[which](value), capsys)
+    if code == 0:
+        assert_finite(json.loads(out))

@@ -108,8 +108,8 @@ def check_text(raw: str, field: str, want: str) -> None:
     position, numbers, previous, before = 0, 0, "", ""
     while position < len(raw):
         match = _TOKEN.match(raw, position)
-        if match is None:
-            return  # a character outside the grammar: pint refuses it with the usual message
+        if match is None:  # a character no quantity uses (",", ";", "$", ...): refused as a whole
+            raise InputError(field, f"must be {want}", got=repr(raw))
         text = match.group(match.lastgroup)
         kind = "close" if text == ")" else match.lastgroup
         position = match.end()

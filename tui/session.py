@@ -149,6 +149,7 @@ def save(path: Path | str, document: Mapping[str, Any], *, expected: Stamp | Non
     ``expected``, or when ``replace`` is set (the user said yes); otherwise
     :class:`ChangedOnDisk` (it changed under us) or :class:`InputError` (it already exists).
     """
+    not_finite(document)
     with file_action(path, "saved"):
         path = Path(path).expanduser()
         now = stamp_of(path)
@@ -163,6 +164,24 @@ def save(path: Path | str, document: Mapping[str, Any], *, expected: Stamp | Non
     if stamp is None:
         raise InputError(str(path), "cannot be saved: the file is gone right after writing it")
     return stamp
+
+
+def not_finite(document: Mapping[str, Any], prefix: str = "") -> None:
+    """Refuse to save a document holding an infinite or NaN number (nothing could read it back).
+
+    >>> not_finite({"weights": {"cost": float("nan")}})
+    Traceback (most recent call last):
+    ...
+    co2routes.thermo.errors.InputError: weights.cost: must be a finite number to be saved (got nan)
+    """
+    import math
+
+    for key, value in document.items():
+        name = f"{prefix}{key}"
+        if isinstance(value, Mapping):
+            not_finite(value, f"{name}.")
+        elif isinstance(value, float) and not math.isfinite(value):
+            raise InputError(name, "must be a finite number to be saved", got=value)
 
 
 def export(path: Path | str, text: str, *, replace: bool = False) -> None:

@@ -194,4 +194,4 @@ def test_delivery_errors_name_the_scenario_key(delivery, field):
                         "test")
     with pytest.raises(InputError) as caught:
         compare(scenario, [catalogue().get("fermentation")])
-    assert caught.value.field == field
+    assert caught.value.field == f"test: {field}"  # the scenario (source "test") and its key

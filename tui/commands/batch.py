@@ -22,8 +22,10 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """The recipe's JSON record."""
-    from co2routes.sources.records import batch_record
+    from co2routes.sources.guard import named_in
+    from co2routes.sources.limits import DEMAND_KG, check_between
     from co2routes.sources.pipeline import check_option_tables, evaluate
+    from co2routes.sources.records import batch_record
     from co2routes.sources.registry import catalogue
     from co2routes.sources.scenario import demo, load
     from co2routes.thermo.errors import InputError
@@ -39,7 +41,13 @@ def run(args: argparse.Namespace) -> dict:
             raise InputError("--option", "must be KEY=VALUE", got=repr(item))
         options[key.strip()] = value.strip()
     co2_kg = None if args.co2 is None else parse_positive(args.co2, "--co2", "mass")
-    result = evaluate(route, scenario, co2_kg=co2_kg, options=options)
+    if co2_kg is not None:
+        low, high = DEMAND_KG
+        check_between(co2_kg, "--co2", low, high, f"between {low * 1000:g} g and {high / 1000:g} t", args.co2)
+    try:
+        result = evaluate(route, scenario, co2_kg=co2_kg, options=options)
+    except InputError as err:
+        raise named_in(scenario, err) from None
     args._result, args._currency = result, scenario.prices.currency
     return batch_record(result, scenario.prices.currency)
 

@@ -25,6 +25,8 @@ def run(args: argparse.Namespace) -> dict:
 
     opened = open_file(args.file)
     status = _open_interface(str(opened.path))
+    if status:  # the interface stopped on a fault and has said where the scenario was kept
+        raise SystemExit(status)
     return {"file": str(opened.path), "exit_status": status, "warnings": [], "cautions": []}
 
 

@@ -27,19 +27,16 @@ def run(args: argparse.Namespace) -> dict:
     from co2routes.thermo.units import parse
 
     from co2routes.thermo.errors import InputError
-    from co2routes.tui.commands._options import for_option
 
     temperature = parse(args.temperature, "--temperature", "temperature")
     if len(args.equation) > 300:
         raise InputError("EQUATION", "must be at most 300 characters", got=f"{len(args.equation)} characters")
     try:
-        with for_option("EQUATION"):
-            result = reaction_enthalpy(args.equation, temperature)
-            names = parse_reaction(args.equation).species_names()
-    except InputError as err:
-        if "data cover" in err.allowed:  # a species' data stop short of the temperature asked
-            raise InputError("--temperature", err.allowed, err.got) from None
-        raise
+        result = reaction_enthalpy(args.equation, temperature)
+        names = parse_reaction(args.equation).species_names()
+    except InputError as err:  # thermo names "temperature" or the equation's parts
+        field = "--temperature" if err.field == "temperature" else "EQUATION"
+        raise InputError(field, err.allowed, err.got) from None
     warnings = list(result.warnings)
     if any(n.endswith("(aq)") for n in names):
         warnings.append(

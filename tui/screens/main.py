@@ -253,12 +253,13 @@ class MainScreen(Filing, Working, WhatIf, Screen):
 
     @on(WeightNudged)
     def _nudged(self, event: WeightNudged) -> None:
+        from co2routes.sources.limits import MAX_WEIGHT
         from co2routes.sources.scenario import DEFAULT_WEIGHTS
 
         keys = ("weights", event.criterion)
         now = value_at(self.document, keys)
         base = now if isinstance(now, (int, float)) else DEFAULT_WEIGHTS[event.criterion]
-        value = max(0.0, float(base) + event.delta)
+        value = min(MAX_WEIGHT, max(0.0, float(base) + event.delta))
         self.document = edited(self.document, keys, value)
         self.dirty = True
         form = self.query_one(ScenarioForm)

@@ -105,8 +105,12 @@ class Working:
         if worker.is_cancelled:
             return
         self.app.call_from_thread(self._charts, generation, None, curve)
-        sweep = demand_sweep(outcome.scenario, self.routes, known=outcome.comparison,
-                             proceed=lambda: not worker.is_cancelled)
+        try:
+            sweep = demand_sweep(outcome.scenario, self.routes, known=outcome.comparison,
+                                 proceed=lambda: not worker.is_cancelled)
+        except Exception as err:  # noqa: BLE001 - a chart that cannot be drawn says so
+            sweep = None
+            self.app.call_from_thread(self._say, f"cost-against-batch chart: {err}", True)
         if sweep is not None and not worker.is_cancelled:
             self.app.call_from_thread(self._charts, generation, sweep, curve)
 
