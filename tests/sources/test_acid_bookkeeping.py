@@ -11,7 +11,7 @@ from __future__ import annotations
 
 import pytest
 
-from co2routes.sources.compare import evaluate
+from co2routes.sources.pipeline import evaluate
 from co2routes.sources.prices import PriceBook, parse_price, reagent_cost
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import demo

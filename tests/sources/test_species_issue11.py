@@ -30,7 +30,7 @@ def test_bare_c4h10_names_both_isomers():
 
 
 def test_combustion_route_names_its_butane():
-    from co2routes.sources.compare import evaluate
+    from co2routes.sources.pipeline import evaluate
     from co2routes.sources.registry import catalogue
     from co2routes.sources.scenario import demo
 
@@ -71,7 +71,7 @@ def test_methane_burnt_counts_in_feed_per_kg():
     # 16.043 / 44.0095 = 0.3645 kg CH4 per kg CO2 (IUPAC atomic weights), divided by the 90 %
     # capture and the CO2 of the air also recovered (1.000 mol CO2 per mol CH4 within 0.1 %,
     # air at 425 ppm); 1 %. It was 0.00 in compare's feed column.
-    from co2routes.sources.compare import evaluate
+    from co2routes.sources.pipeline import evaluate
     from co2routes.sources.registry import catalogue
     from co2routes.sources.scenario import demo
 
