@@ -112,6 +112,13 @@ def _ppmv(text: str) -> float:
     return parse_positive(value, "--target-ppmv", "fraction")
 
 
+def _currency() -> str:
+    """The currency the dryer's invented demo prices are read in: the demo price book's."""
+    from co2routes.sources.prices import demo_book
+
+    return demo_book().currency
+
+
 def run(args: argparse.Namespace) -> dict:
     """Size the bed and return the JSON answer."""
     from co2routes.thermo.dryer import DryerInput, breakthrough_curve, size_dryer
@@ -183,7 +190,9 @@ def run(args: argparse.Namespace) -> dict:
         "cost_per_kg_co2": result.cost_per_kg_co2,
         "breakthrough_curve": [{"time_h": c.time_s / 3600.0, "outlet_ppmv": c.outlet_ppmv}
                                for c in curve],
+        "currency": _currency(),
         "warnings": list(result.warnings) + [
-            "Costs use invented demo prices (desiccant and regeneration energy) in no currency."],
+            f"Costs use invented demo prices (desiccant and regeneration energy) in {_currency()}, "
+            "the currency of the demo price book."],
         "cautions": list(result.cautions),
     }

@@ -29,7 +29,7 @@ def run(args: argparse.Namespace) -> dict:
     option, text = (("--temperature", args.temperature) if args.temperature is not None
                     else ("--dew-point", args.dew_point))
     t = parse(text, option, "temperature")
-    with for_option(option):
+    with for_option(option, text, t):
         m = water.moisture_from_dew_point(t, p)
     warnings = ["Ideal mixing, no enhancement factor: real gas near saturation holds a few per cent "
                 "more water, more at high pressure."]

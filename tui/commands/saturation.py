@@ -25,11 +25,11 @@ def run(args: argparse.Namespace) -> dict:
 
     if args.temperature is not None:
         t = parse(args.temperature, "--temperature", "temperature")
-        with for_option("--temperature"):
+        with for_option("--temperature", args.temperature, t):
             sat = co2.saturation_at_temperature(t)
     else:
         p = parse(args.pressure, "--pressure", "pressure")
-        with for_option("--pressure"):
+        with for_option("--pressure", args.pressure, p):
             sat = co2.saturation_at_pressure(p)
     warnings = []
     if co2.CRITICAL_TEMPERATURE_K - sat.temperature_k < 2.0:

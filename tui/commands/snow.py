@@ -54,11 +54,11 @@ def run(args: argparse.Namespace) -> dict:
     mass = None if args.liquid_mass is None else parse_positive(args.liquid_mass, "--liquid-mass", "mass")
     if args.liquid_temperature is not None:
         t = parse(args.liquid_temperature, "--liquid-temperature", "temperature")
-        with for_option("--liquid-temperature"):
+        with for_option("--liquid-temperature", args.liquid_temperature, t):
             result = flash.flash_at_temperature(t, mass)
     else:
         p = parse(args.liquid_pressure, "--liquid-pressure", "pressure")
-        with for_option("--liquid-pressure"):
+        with for_option("--liquid-pressure", args.liquid_pressure, p):
             result = flash.flash_at_pressure(p, mass)
     warnings = [
         "The fraction is the adiabatic ideal: snow horns and bags collect less, since some snow is "

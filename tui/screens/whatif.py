@@ -4,7 +4,7 @@
   (:func:`co2routes.sources.sensitivity.route_sensitivity`). Worked out lazily, in an exclusive thread
   worker: when the tab is opened, and again after an edit or a new route choice only while the tab
   is open. An answer is kept per (ranking generation, route), so going back to the tab costs nothing.
-- **Uncertainty** (the "Spread" tab, key :data:`SPREAD_KEY`): a Monte Carlo run of every route
+- **Uncertainty** (the "Cost range" tab, key :data:`SPREAD_KEY`): a Monte Carlo run of every route
   (:func:`co2routes.sources.uncertainty.uncertainty`) with a fresh seed, in an exclusive thread worker that
   moves the tab's progress bar; a newer run or leaving the screen stops it at its next step.
 
@@ -133,7 +133,7 @@ class WhatIf:
     # -- uncertainty ----------------------------------------------------------------------
 
     def action_draw_samples(self) -> None:
-        """Run the Monte Carlo of every route and open the Spread tab."""
+        """Run the Monte Carlo of every route and open the Cost range tab."""
         if self.outcome is None:
             self._say("no ranking yet: the samples are drawn once the routes are ranked", True)
             return

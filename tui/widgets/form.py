@@ -32,7 +32,8 @@ class FieldEdited(Message):
 
 
 class FieldRow(Vertical):
-    """One field: its label with the unit hint, the input, and a line for its error."""
+    """One field: its label, the input, the unit hint (shown while the field has the focus, so a
+    label never wraps) and a line for its error."""
 
     def __init__(self, field: Field, text: str) -> None:
         super().__init__(classes="field-row")
@@ -43,10 +44,11 @@ class FieldRow(Vertical):
 
     def compose(self) -> ComposeResult:
         f = self.field
-        yield Label(Text.assemble(f.label, ("  ", ""), (f"[{f.hint}]", "dim")), classes="field-label")
+        yield Label(f.label, classes="field-label")
         suggester = SuggestFromList(f.choices, case_sensitive=False) if f.choices else None
         yield Input(self._text, placeholder=f.default, id=f.widget_id, compact=True,
                     suggester=suggester, select_on_focus=False, tooltip=f"{f.dotted}: {f.hint}")
+        yield Static(Text(f"type: {f.hint}", style="italic"), classes="field-hint")
         yield Static("", classes="field-error")
 
     def mark(self, reason: str | None) -> None:

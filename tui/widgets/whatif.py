@@ -84,7 +84,7 @@ class TornadoPanel(VerticalScroll):
 
 
 class SpreadPanel(VerticalScroll):
-    """The "Spread" tab: the Monte Carlo progress bar, the chosen route's percentiles and chance of
+    """The "Cost range" tab: the Monte Carlo progress bar, the chosen route's percentiles and chance of
     being cheapest, the box chart of every route and under it the chosen route's histogram."""
 
     DEFAULT_CSS = css_of(__file__, "whatif-spread.tcss")
