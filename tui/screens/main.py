@@ -217,7 +217,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         comparison = self.outcome.comparison
         curve = self.breakthrough.get(row.result.route_id) if row is not None else None
         self.query_one(RouteDetail).show(row, comparison.currency, comparison.end_product, curve)
-        self.query_one(CautionPanel).show(row)
+        self.query_one(CautionPanel).show(row, comparison.rows)
 
     def _weights_line(self) -> None:
         weights = self.outcome.comparison.weights

@@ -128,7 +128,12 @@ class WhatIf:
         ranges = (f"ranges: {named} from the scenario's [uncertain] table, else " if named else "ranges: ") + \
             (f"prices x{p_lo:g}..x{p_hi:g}, fractions -/+{points:g} points, temperatures -/+{dt:g} K, "
              f"demand x{f_lo:g}..x{f_hi:g}")
-        self.query_one(TornadoPanel).show(self.tornadoes[key], self.outcome.comparison.currency, ranges)
+        from co2routes.sources.registry import catalogue
+        from co2routes.tui.typed import typed_units
+
+        route = self.tornadoes[key]
+        units = typed_units(self.outcome.scenario, self.routes or catalogue().routes, [s.name for s in route.inputs])
+        self.query_one(TornadoPanel).show(route, self.outcome.comparison.currency, ranges, units)
 
     # -- uncertainty ----------------------------------------------------------------------
 

@@ -206,13 +206,17 @@ class CautionPanel(VerticalScroll):
     def compose(self) -> ComposeResult:
         yield Static(Text(LOCAL_CODES), id="caution-text")
 
-    def show(self, row: Any | None) -> None:
-        """Show the cautions of ``row`` (always with the local-codes reminder)."""
+    def show(self, row: Any | None, rows: Any = ()) -> None:
+        """Show the cautions of ``row`` (always with the local-codes reminder); a warning other
+        ``rows`` share is said once, with the routes it concerns."""
         lines: list[Any] = [Text("⚠ Cautions", style="bold")]
         if row is not None:
             r = row.result
             lines.append(Text.assemble(("hazard ", "bold"), (f"{r.hazard}", "bold"), f": {r.hazard_reason}"))
-            lines += [Text(f"! {w}", style="yellow") for w in r.warnings]
+            for w in r.warnings:
+                others = [o.result.label for o in rows if o is not row and w in o.result.warnings]
+                lines.append(Text.assemble((f"! {w}", "yellow"),
+                                           (f" (also {', '.join(others)})" if others else "", "dim")))
             cautions = list(r.cautions)
             for extra in (getattr(r, "dryer", None), getattr(r, "delivery", None)):
                 cautions += [c for c in getattr(extra, "cautions", ()) if c not in cautions]
