@@ -92,8 +92,9 @@ async def _at_every_size(pilot, name: str, failed: list[str]) -> None:
 
 
 async def test_every_state_at_every_size():
-    """Start-up (focus in the first field), an inline error, the keys screen, and a dry-ice
-    scenario's Delivery tab with the focus on the routes; each at 80x24, 120x40 and 200x50.
+    """Start-up (focus in the first field), an inline error, the keys screen, a dry-ice
+    scenario's Delivery tab with the focus on the routes, and its cost-by-size chart; each at
+    80x24, 120x40 and 200x50.
     One app is resized rather than one started per picture: the suite stays fast."""
     failed: list[str] = []
     app = Co2RoutesApp(None, routes=doubles())
@@ -111,6 +112,9 @@ async def test_every_state_at_every_size():
         assert app.planner.outcome.scenario.end_product == "dry-ice"
         await pilot.press("escape", "3")
         await _at_every_size(pilot, "dry-ice-delivery", failed)
+        # the cost-by-size chart redrawn at each size: a mark per route, its key under the plot
+        await pilot.press("5")
+        await _at_every_size(pilot, "cost-by-size", failed)
     assert not failed, "\n".join(failed)
 
 

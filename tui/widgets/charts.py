@@ -88,9 +88,15 @@ class CostCurve(_Chart):
             self.empty("cost per kg against batch size: no routes to draw")
             return
         plt = self._start("cost per kg against batch size")
+        known = [y for costs in sweep.cost_per_kg.values() for y in costs
+                 if y is not None and math.isfinite(y) and y > 0]
+        # log scales drawn as log10 of the data with ticks labelled in the data's own numbers:
+        # plotext's own log scale takes the log again each time the chart is drawn (a resize)
+        log_y = bool(known) and max(known) > 20 * min(known)  # one dear route would flatten the rest
         legend = []
         for rid, costs in sweep.cost_per_kg.items():
-            pts = [(x, y) for x, y in zip(sweep.co2_kg, costs) if y is not None and math.isfinite(y)]
+            pts = [(math.log10(x), math.log10(y) if log_y else y) for x, y in zip(sweep.co2_kg, costs)
+                   if y is not None and math.isfinite(y) and x > 0 and (y > 0 or not log_y)]
             if pts:
                 mark = MARKS[len(legend) % len(MARKS)]
                 plt.plot([p[0] for p in pts], [p[1] for p in pts], marker=mark)
@@ -99,17 +105,24 @@ class CostCurve(_Chart):
         if not drawn:
             self.empty("cost per kg against batch size: every price is unknown")
             return
-        plt.xscale("log")
-        known = [y for costs in sweep.cost_per_kg.values() for y in costs if y and math.isfinite(y) and y > 0]
-        if known and max(known) > 20 * min(known):
-            plt.yscale("log")  # one dear route would flatten all the others
-        plt.xlabel("kg CO2 per batch")
+        _log_ticks(plt.xticks, [x for x in sweep.co2_kg if x > 0])
+        if log_y:
+            _log_ticks(plt.yticks, known)
+        plt.xlabel("kg CO2 per batch (log scale)")
         plt.ylabel(f"{sweep.currency}/kg")
         if current_kg:
-            plt.vline(current_kg, "gray")
+            plt.vline(math.log10(current_kg), "gray")
         self._key(legend, "upright line: this scenario's batch" if current_kg else "")
         self.showing = f"cost curve of {drawn} routes"
         self.refresh()
+
+
+def _log_ticks(set_ticks: Any, values: Sequence[float]) -> None:
+    """Ticks at 1, 2, 5 x 10^k on an axis drawn as log10 of ``values``, labelled in the values."""
+    from co2routes.tui.widgets.spread import log_ticks
+
+    ticks = log_ticks(min(values), max(values))
+    set_ticks([math.log10(t) for t in ticks], [f"{t:g}" for t in ticks])
 
 
 class SaturationPlot(_Chart):
