@@ -214,7 +214,7 @@ class CautionPanel(VerticalScroll):
             r = row.result
             lines.append(Text.assemble(("hazard ", "bold"), (f"{r.hazard}", "bold"), f": {r.hazard_reason}"))
             for w in r.warnings:
-                others = [o.result.label for o in rows if o is not row and w in o.result.warnings]
+                others = [o.result.route_id for o in rows if o is not row and w in o.result.warnings]
                 lines.append(Text.assemble((f"! {w}", "yellow"),
                                            (f" (also {', '.join(others)})" if others else "", "dim")))
             cautions = list(r.cautions)
