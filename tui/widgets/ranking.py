@@ -141,10 +141,13 @@ class RankingTable(DataTable):
         if reverse and column.key == "route":
             ordered.reverse()
         self.rows_shown = ordered
-        self.clear(columns=True)
         shown, route_width = self._layout(ordered)
-        for c in shown:
-            self.add_column(self._heading(c), key=c.key, width=route_width if c.key == "route" else None)
+        layout = (tuple(c.key for c in shown), route_width, self.sort_key, self.descending)
+        self.clear(columns=layout != getattr(self, "_layout_now", None))  # columns only when they change
+        if layout != getattr(self, "_layout_now", None):
+            self._layout_now = layout
+            for c in shown:
+                self.add_column(self._heading(c), key=c.key, width=route_width if c.key == "route" else None)
         for row in ordered:
             cells = []
             for c in shown:
