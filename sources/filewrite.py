@@ -39,6 +39,10 @@ def _merge(table: Any, new: Mapping[str, Any]) -> None:
                 old, tomlkit.items.InlineTable):
             _merge(old, value)
         elif _plain(old) != value:
+            if isinstance(old, tomlkit.items.InlineTable) and isinstance(value, Mapping):
+                inline = tomlkit.inline_table()  # an inline table stays inline
+                inline.update(value)
+                value = inline
             table[key] = value
 
 

@@ -110,3 +110,10 @@ def test_existing_file_is_a_question_and_an_unwritable_place_is_a_plain_error(tm
     with pytest.raises(InputError) as err:
         save(tmp_path / "no" / "such.toml", {"demand": "1 kg"}, expected=None)
     assert not isinstance(err.value, AlreadyExists) and "does not exist" in str(err.value)
+
+
+def test_an_inline_table_stays_inline():
+    base = '[prices]\nhydrochloric-acid = {price = "0.45 / kg", strength = "31 %"}  # my supplier\n'
+    doc = {"prices": {"hydrochloric-acid": {"price": "0.50 / kg", "strength": "31 %"}}}
+    text = updated_text(base, doc)
+    assert text == '[prices]\nhydrochloric-acid = {price = "0.50 / kg", strength = "31 %"}  # my supplier\n'
