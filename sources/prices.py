@@ -7,7 +7,6 @@ A missing price makes that cost unknown (``None``), never zero.
 
 from __future__ import annotations
 
-import tomllib
 from dataclasses import dataclass, replace
 from importlib import resources
 from pathlib import Path

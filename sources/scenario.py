@@ -28,8 +28,6 @@ Schema (every quantity a string with units)::
 from __future__ import annotations
 
 import copy
-import os
-import tempfile
 from dataclasses import dataclass, field
 from importlib import resources
 from pathlib import Path
@@ -354,35 +352,7 @@ def demo(which: str = "polytunnel", book: PriceBook | None = None) -> Scenario:
 
 
 def to_toml(document: Mapping[str, Any]) -> str:
-    """The document as TOML text (what save writes)."""
+    """The document as plain TOML text (saving writes :func:`co2routes.sources.filewrite.updated_text`)."""
     import tomli_w
 
     return tomli_w.dumps(dict(document))
-
-
-def write_atomic(path: Path | str, text: str, *, overwrite: bool = False) -> None:
-    """Write ``text`` to ``path`` through a temporary file in the same folder, then rename.
-
-    Refuses to replace an existing file unless ``overwrite`` is set. A failure leaves any existing
-    file untouched and removes the temporary file.
-    """
-    path = Path(path)
-    if path.exists() and not overwrite:
-        raise InputError(str(path), "already exists; choose another name or allow overwriting")
-    folder = path.parent if str(path.parent) else Path(".")
-    try:
-        fd, tmp = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".tmp", dir=folder)
-    except OSError as err:
-        raise InputError(str(path), f"cannot be written: {err.strerror}") from None
-    try:
-        with os.fdopen(fd, "w", encoding="utf-8") as handle:
-            handle.write(text)
-            handle.flush()
-            os.fsync(handle.fileno())
-        os.replace(tmp, path)
-    except OSError as err:
-        try:
-            os.unlink(tmp)
-        except OSError:
-            pass
-        raise InputError(str(path), f"cannot be written: {err.strerror}") from None

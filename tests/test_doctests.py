@@ -12,7 +12,7 @@ import importlib
 import pkgutil
 
 import pytest
-from _pytest.doctest import _get_checker, get_optionflags  # noqa: F401 - pytest's own checker
+from _pytest.doctest import _get_checker  # pytest's own checker (its NUMBER flag)
 
 
 _NUMBER = doctest.OPTIONFLAGS_BY_NAME.get("NUMBER") or doctest.register_optionflag("NUMBER")

@@ -10,7 +10,7 @@ from __future__ import annotations
 from typing import Any, Iterable, Mapping
 
 from co2routes.tui.fields import Field, match_field, price_value
-from co2routes.tui.session import edited
+from co2routes.tui.session import edited, value_at
 
 
 def document_after(document: Mapping[str, Any], field: Field, text: str, book: Any) -> dict[str, Any]:
@@ -26,14 +26,15 @@ def document_after(document: Mapping[str, Any], field: Field, text: str, book: A
     return edited(document, field.keys, value)
 
 
-def refusal_marks(fields: Iterable[Field], err: Any, edited_field: Field | None
-                  ) -> list[tuple[Field, str | None]]:
+def refusal_marks(fields: Iterable[Field], err: Any, edited_field: Field | None,
+                  document: Mapping[str, Any] | None = None) -> list[tuple[Field, str | None]]:
     """The marks to show for a refused scenario: ``(field, reason)``, a ``None`` reason clears.
 
     The reason goes under the field the error names (``err.field``, matched by
     :func:`co2routes.tui.fields.match_field`), else under the field just edited; when the error
     names another field, the edited one is cleared. A reason shown under a field the error does
-    not name starts with the name it does.
+    not name starts with the name it does. A number the error echoes is shown as the user typed
+    it in ``document`` (their unit, not SI).
 
     >>> from co2routes.thermo.errors import InputError
     >>> demand = Field(("demand",), "demand", "")
@@ -42,7 +43,11 @@ def refusal_marks(fields: Iterable[Field], err: Any, edited_field: Field | None
     """
     fields = list(fields)
     field = match_field(fields, err.field) or edited_field
-    reason = err.allowed + (f" (got {err.got})" if err.got is not None else "")
+    got = err.got
+    if isinstance(got, (int, float)) and not isinstance(got, bool) and field is not None and document is not None:
+        typed = value_at(document, field.keys)
+        got = repr(typed) if isinstance(typed, str) else got
+    reason = err.allowed + (f" (got {got})" if got is not None else "")
     marks: list[tuple[Field, str | None]] = []
     if edited_field is not None and field is not edited_field:
         marks.append((edited_field, None))

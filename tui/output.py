@@ -51,6 +51,17 @@ _SUFFIXES: dict[str, tuple[str, float, float]] = {
 }
 
 
+#: Keys whose words, read off the key, would be unclear: key -> the label shown instead.
+WORDS = {
+    "raw_co2_kg": "CO2 to make or buy",
+    "raw_co2_kg_per_kg": "CO2 to make or buy per kg of product",
+    "co2_generated_kg": "CO2 made or bought",
+    "co2_kg": "CO2 delivered",
+    "product_kg": "end product wanted",
+    "solid_fraction": "share that turns to dry ice",
+}
+
+
 def label_of(key: str) -> tuple[str, str]:
     """Split a key into a human label and its display unit.
 
@@ -58,11 +69,13 @@ def label_of(key: str) -> tuple[str, str]:
     ('vapor density', 'kg/m³')
     >>> label_of("phase")
     ('phase', '')
+    >>> label_of("raw_co2_kg_per_kg")
+    ('CO2 to make or buy per kg of product', 'kg/kg')
     """
     for suffix in sorted(_SUFFIXES, key=len, reverse=True):
         if key.endswith(suffix):
-            return key[: -len(suffix)].replace("_", " "), _SUFFIXES[suffix][0]
-    return key.replace("_", " "), ""
+            return WORDS.get(key, key[: -len(suffix)].replace("_", " ")), _SUFFIXES[suffix][0]
+    return WORDS.get(key, key.replace("_", " ")), ""
 
 
 def format_value(key: str, value: Any) -> str:

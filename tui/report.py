@@ -21,7 +21,7 @@ COLUMNS: tuple[tuple[str, str, str], ...] = (
     ("energy_kwh_per_kg", "kWh/kg", "{:.2f}"),
     ("time_h", "time h", "{:.1f}"),
     ("reagent_kg_per_kg", "feed kg/kg", "{:.2f}"),
-    ("heat_kj", "heat kJ", "{:+.0f}"),
+    ("heat_kj_per_kg", "heat kJ/kg", "{:+.0f}"),
     ("water_g_per_kg_co2", "water g/kg", "{:.1f}"),
     ("co2_mole_fraction", "CO2 %", "{:.1%}"),
     ("hazard", "hazard", "{:d}"),
@@ -44,8 +44,13 @@ def cell(key: str, fmt: str, value: Any) -> str:
         return str(value)
 
 
+#: Columns worked out from a route's record: heat per kg of end product, as the interface shows it.
+DERIVED = {"heat_kj_per_kg": lambda r: None if not r.get("product_kg") else r["heat_kj"] / r["product_kg"]}
+
+
 def _rows(record: Mapping[str, Any]) -> list[list[str]]:
-    return [[cell(k, f, route[k]) for k, _, f in COLUMNS] for route in record["routes"]]
+    return [[cell(k, f, route[k] if k in route else DERIVED[k](route)) for k, _, f in COLUMNS]
+            for route in record["routes"]]
 
 
 def grouped_warnings(record: Mapping[str, Any]) -> dict[str, list[str]]:
@@ -126,6 +131,7 @@ def comparison_table(comparison: Comparison) -> str:
     lines.append("dryer per route:")
     width = max((len(route["id"]) for route in record["routes"]), default=0)
     lines += [f"  {route['id']:<{width}}  {bed_words(route['dryer'])}" for route in record["routes"]]
+    lines.insert(1, f"every per-kg figure is per kg of {record['end_product'].replace('-', ' ')}")
     if record["end_product"] != "gas":
         lines.append("delivery per route (per-kg figures above are per kg of "
                      f"{record['end_product'].replace('-', ' ')}):")
@@ -152,9 +158,8 @@ def comparison_markdown(comparison: Comparison) -> str:
     out += ["| " + " | ".join(row) + " |" for row in _rows(record)]
     out += [f"- Not applicable: {n['label']} ({n['id']}): {n['reason']}" for n in record["not_applicable"]]
     out += ["", "Weights: " + ", ".join(f"{k} {v:g}" for k, v in record["weights"].items()) + ".", ""]
+    out += [f"Every per-kg figure is per kg of {record['end_product'].replace('-', ' ')}.", ""]
     out += ["## Dryer and delivery per route", ""]
-    if record["end_product"] != "gas":
-        out += [f"Per-kg figures are per kg of {record['end_product'].replace('-', ' ')}.", ""]
     out += ["| route | dryer | delivery |", "|---|---|---|"]
     out += [f"| {route['id']} | {bed_words(route['dryer'])} | {delivery_words(route['delivery'])} |"
             for route in record["routes"]]

@@ -2,8 +2,10 @@
 
 No widgets here, so all of it is tested in plain pytest. The document is the TOML as a plain dict
 (see :mod:`co2routes.sources.scenario`); an edit changes one key of a copy, so a failed edit never touches
-the last good document. Saving goes through :func:`co2routes.sources.scenario.write_atomic` and refuses to
-overwrite a file that changed on disk since it was opened unless the caller says so.
+the last good document. Saving goes through :func:`co2routes.sources.filewrite.write_atomic` and refuses to
+overwrite a file that changed on disk since it was opened unless the caller says so. What is saved
+is the text the scenario was opened from with only the changed values rewritten
+(:func:`co2routes.sources.filewrite.updated_text`), so the user's comments and layout survive.
 """
 
 from __future__ import annotations
@@ -14,8 +16,9 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any, Mapping
 
+from co2routes.sources.filewrite import AlreadyExists, updated_text, writable, write_atomic
 from co2routes.sources.limits import file_action, loads
-from co2routes.sources.scenario import demo_text, read_document, to_toml, write_atomic
+from co2routes.sources.scenario import demo_text, read_document
 from co2routes.thermo.errors import InputError
 
 
@@ -141,8 +144,12 @@ def value_at(document: Mapping[str, Any], keys: tuple[str, ...]) -> Any:
 
 
 def save(path: Path | str, document: Mapping[str, Any], *, expected: Stamp | None,
-         replace: bool = False) -> Stamp:
+         replace: bool = False, base: str | None = None) -> Stamp:
     """Write ``document`` to ``path`` atomically and return the new stamp.
+
+    ``base`` is the text the scenario was opened from: only the values that changed are
+    rewritten in it (comments, blank lines and key order stay). A path that cannot be written
+    raises :class:`InputError` before anything else is asked.
 
     ``expected`` is the stamp the file had when this session read or last wrote it (``None`` when
     the session never had it). An existing file is replaced only when its stamp still equals
@@ -152,14 +159,17 @@ def save(path: Path | str, document: Mapping[str, Any], *, expected: Stamp | Non
     not_finite(document)
     with file_action(path, "saved"):
         path = Path(path).expanduser()
+        why = writable(path)
+        if why is not None:
+            raise InputError(str(path), f"cannot be saved: {why}")
         now = stamp_of(path)
         if now is not None and not replace:
             if expected is None:
-                raise InputError(str(path), "already exists; choose another name or allow replacing it")
+                raise AlreadyExists(str(path), "already exists; choose another name or allow replacing it")
             if now != expected:
                 raise ChangedOnDisk(str(path), "was changed on disk since it was opened; "
                                     "reload it or allow replacing it")
-        write_atomic(path, to_toml(document), overwrite=now is not None)
+        write_atomic(path, updated_text(base, document), overwrite=now is not None)
         stamp = stamp_of(path)
     if stamp is None:
         raise InputError(str(path), "cannot be saved: the file is gone right after writing it")

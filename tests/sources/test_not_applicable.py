@@ -2,7 +2,6 @@
 
 import dataclasses
 
-from co2routes.sources.base import Site
 from co2routes.sources.pipeline import compare
 from co2routes.sources.records import comparison_record
 from co2routes.sources.scenario import demo

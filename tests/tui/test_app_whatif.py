@@ -40,6 +40,7 @@ async def test_tornado_is_worked_out_when_its_tab_opens_in_the_order_sensitivity
     app = Co2RoutesApp(None)
     async with app.run_test(size=(120, 40)) as pilot:
         await settle(pilot)
+        await pilot.press("escape")  # out of the first field: digits now pick tabs
         tornado = app.screen.query_one(Tornado)
         # lazily: nothing is swung before the tab is opened
         assert app.planner.tornadoes == {} and tornado.showing == "empty"
@@ -64,6 +65,7 @@ async def test_an_edit_swings_again_only_while_the_tab_is_open():
     app = Co2RoutesApp(None)
     async with app.run_test(size=(120, 40)) as pilot:
         await settle(pilot)
+        await pilot.press("escape")  # out of the first field: digits now pick tabs
         planner = app.planner
 
         async def edit(text: str) -> None:
@@ -93,6 +95,7 @@ async def test_uncertain_table_ranges_reach_the_tornado(tmp_path):
     app = Co2RoutesApp(str(path))
     async with app.run_test(size=(120, 40)) as pilot:
         await settle(pilot)
+        await pilot.press("escape")  # out of the first field: digits now pick tabs
         row = next(r for r in app.planner.outcome.comparison.rows if r.result.route_id == "fermentation")
         app.screen.query_one("#ranking").move_cursor(row=row.rank - 1)
         await settle(pilot)
@@ -111,11 +114,12 @@ async def test_monte_carlo_key_shows_progress_then_the_spread_uncertainty_gives(
     app = Co2RoutesApp(None)
     async with app.run_test(size=(120, 40)) as pilot:
         await settle(pilot)
+        await pilot.press("escape")  # out of the first field: digits now pick tabs
         assert app.planner.spread is None
         app.screen.query_one("#ranking").focus()
         await pilot.press(SPREAD_KEY)
         await pilot.pause()
-        # the key opens the Spread tab and shows its progress bar at once
+        # the key opens the Cost range tab and shows its progress bar at once
         assert app.planner.query_one("#detail-tabs").active == "t-spread"
         bar = app.screen.query_one("#spread-bar", ProgressBar)
         assert bar.display
@@ -156,6 +160,7 @@ async def test_spread_tab_says_which_key_and_marks_a_run_older_than_the_inputs()
     app = Co2RoutesApp(None)
     async with app.run_test(size=(120, 40)) as pilot:
         await settle(pilot)
+        await pilot.press("escape")  # out of the first field: digits now pick tabs
         await pilot.press(TAB_SPREAD)
         await settle(pilot)
         assert f"press {SPREAD_KEY}" in str(app.screen.query_one("#spread-note").render())

@@ -70,6 +70,8 @@ def render(answer: dict, args: argparse.Namespace) -> str:
     if delivery is not None and delivery["stages"] is None:
         # bought already condensed or solid: no compression figures to show, rather than unknowns
         delivery = {k: v for k, v in delivery.items() if v is not None}
+    if delivery is not None and delivery.get("end_product") != "dry-ice":
+        delivery.pop("solid_fraction", None)  # nothing is flashed to snow for gas or liquid
     return text + _section("dryer", answer.get("dryer"), "no dryer") + _section(
         "delivery", delivery, "none: the end product is the gas as made")
 

@@ -20,10 +20,10 @@ def run(args: argparse.Namespace) -> dict:
     """The equilibrium point's JSON answer."""
     from co2routes.thermo import cautions
     from co2routes.thermo.calcination import calcination_temperature, co2_pressure_over_calcite
-    from co2routes.tui.commands._options import for_option, given
+    from co2routes.tui.commands._options import for_option, given, typed_text
 
     option, value = given(args, ("--temperature", "temperature"), ("--co2-pressure", "pressure+"))
-    with for_option(option):
+    with for_option(option, typed_text(args, option), value):
         point = (co2_pressure_over_calcite if option == "--temperature" else calcination_temperature)(value)
     warnings = [
         "Equilibrium for pure calcite: kilns run hotter than this to calcine at a useful rate "

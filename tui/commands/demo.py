@@ -18,7 +18,8 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 
 def run(args: argparse.Namespace) -> dict:
     """Write the demo scenario atomically, never over an existing file unless asked."""
-    from co2routes.sources.scenario import demo_text, write_atomic
+    from co2routes.sources.filewrite import write_atomic
+    from co2routes.sources.scenario import demo_text
     from co2routes.tui.commands._options import for_option
 
     with for_option("--which"):

@@ -112,9 +112,9 @@ def _ppmv(text: str) -> float:
     return parse_positive(value, "--target-ppmv", "fraction")
 
 
-def _prices(kwargs: dict, desiccant: str) -> tuple[str, bool]:
+def _prices(kwargs: dict, desiccant: str) -> tuple[str, bool, str]:
     """Put the price book's desiccant and electricity prices into ``kwargs``; return the sentence
-    saying where the cost comes from and whether it is known.
+    saying where the cost comes from, whether it is known, and the book's currency.
 
     The book is the user's own (:func:`co2routes.sources.prices.load_book`), else the invented
     demo book; the regeneration heater is priced as electricity, as in the comparison
@@ -130,11 +130,11 @@ def _prices(kwargs: dict, desiccant: str) -> tuple[str, bool]:
                if price is None or price.per != per]
     if missing:
         return (f"Cost unknown: {where} has no price for {' or '.join(missing)} (per kg for the "
-                "desiccant, per kWh for electricity).", False)
+                "desiccant, per kWh for electricity).", False, book.currency)
     kwargs["price_per_kg"] = charge.amount
     kwargs["energy_price_per_kwh"] = power.amount * 3.6e6
     return (f"Costs use {where} in {book.currency}: {desiccant} and electricity for regeneration.",
-            True)
+            True, book.currency)
 
 
 def run(args: argparse.Namespace) -> dict:
@@ -209,6 +209,7 @@ def run(args: argparse.Namespace) -> dict:
         "cost_per_kg_co2": result.cost_per_kg_co2 if book_note[1] else None,
         "breakthrough_curve": [{"time_h": c.time_s / 3600.0, "outlet_ppmv": c.outlet_ppmv}
                                for c in curve],
+        "currency": book_note[2],
         "warnings": list(result.warnings) + [book_note[0]],
         "cautions": list(result.cautions),
     }

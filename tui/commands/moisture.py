@@ -23,12 +23,12 @@ def run(args: argparse.Namespace) -> dict:
     """The gas's water content as the JSON answer (Spycher et al. 2003 model, CO2 phase named)."""
     from co2routes.thermo import cautions, water_co2
     from co2routes.thermo.units import parse_positive
-    from co2routes.tui.commands._options import for_option, given
+    from co2routes.tui.commands._options import for_option, given, typed_text
 
     p = parse_positive(args.pressure, "--pressure", "pressure")
     option, t = given(args, ("--temperature", "temperature"), ("--dew-point", "temperature"))
     dew = args.temperature is None
-    with for_option(option):
+    with for_option(option, typed_text(args, option), t):
         w = water_co2.saturated_water_in_co2(t, p, vapour=dew)
     warnings = water_co2.warnings_for(w)
     condensing = water_co2.co2_condenses_first(t, p) if dew else None

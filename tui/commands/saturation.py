@@ -19,10 +19,10 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
 def run(args: argparse.Namespace) -> dict:
     """The saturation point as the JSON answer."""
     from co2routes.thermo import cautions, co2
-    from co2routes.tui.commands._options import for_option, given
+    from co2routes.tui.commands._options import for_option, given, typed_text
 
     option, value = given(args, ("--temperature", "temperature"), ("--pressure", "pressure"))
-    with for_option(option):
+    with for_option(option, typed_text(args, option), value):
         sat = (co2.saturation_at_temperature if option == "--temperature" else co2.saturation_at_pressure)(value)
     warnings = []
     if co2.CRITICAL_TEMPERATURE_K - sat.temperature_k < 2.0:

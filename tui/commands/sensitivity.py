@@ -42,14 +42,18 @@ def whatif_inputs(args: argparse.Namespace):
 def run(args: argparse.Namespace) -> dict:
     """The sensitivity as its JSON record."""
     from co2routes.sources.sensitivity import sensitivity, sensitivity_record
-    from co2routes.thermo.errors import InputError
-
     from co2routes.tui.commands.uncertainty import whole
+    from co2routes.tui.typed import typed_units
 
     whole(args.top, "--top", 1, 10_000)
+
     scenario, spreads, routes = whatif_inputs(args)
-    return {"end_product": scenario.end_product,
-            **sensitivity_record(sensitivity(scenario, spreads, routes))}
+    record = sensitivity_record(sensitivity(scenario, spreads, routes))
+    for route in record["routes"]:
+        units = typed_units(scenario, routes, [i["name"] for i in route["inputs"]])
+        for item in route["inputs"]:
+            item["typed_unit"] = units.get(item["name"])  # the unit the value was typed in
+    return {"end_product": scenario.end_product, **record}
 
 
 def per_kg_words(answer: dict) -> str:
@@ -64,6 +68,8 @@ def per_kg_words(answer: dict) -> str:
 def render(answer: dict, args: argparse.Namespace) -> str:
     """A text tornado per route: bars from the low-end to the high-end cost around the nominal."""
     from co2routes.thermo.cautions import LOCAL_CODES
+    from co2routes.tui.report import grouped_warnings
+    from co2routes.tui.typed import as_typed
 
     top = int(args.top)
     cur = answer["currency"]
@@ -93,12 +99,13 @@ def render(answer: dict, args: argparse.Namespace) -> str:
                     idx = BAR - 1 - k if side is left else k
                     side[idx] = mark if side[idx] == " " else "*"
             lines.append(f"  {item['name']:<{width}}  {''.join(left)}|{''.join(right)}  "
-                         f"{lo:.3f} .. {hi:.3f}  (input {_shown(item['low'], item['unit'])} .. {_shown(item['high'], item['unit'])})")
+                         f"{lo:.3f} .. {hi:.3f}  (input {as_typed(item['low'], item['unit'], item.get('typed_unit'))} .. "
+                         f"{as_typed(item['high'], item['unit'], item.get('typed_unit'))})")
         if len(route["inputs"]) > top:
             lines.append(f"  ... {len(route['inputs']) - top} more (--top, or --json)")
-        for w in route["warnings"]:
-            lines.append(f"  WARNING: {w}")
     lines.append("")
+    # a warning several routes share is said once, with the routes it concerns
+    lines += [f"WARNING [{', '.join(ids)}]: {text}" for text, ids in grouped_warnings(answer).items()]
     lines.append("bars: '-' cost with the input at its low end, '+' at its high end, '|' the nominal cost")
     lines += [f"note: {f}" for f in answer["failures"]]
     lines += [f"caution: {c}" for c in answer["cautions"]] + [f"caution: {LOCAL_CODES}"]

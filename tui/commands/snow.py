@@ -48,11 +48,11 @@ def run(args: argparse.Namespace) -> dict:
     """The flash result as the JSON answer."""
     from co2routes.thermo import cautions, flash
     from co2routes.thermo.units import parse, parse_positive
-    from co2routes.tui.commands._options import for_option, given
+    from co2routes.tui.commands._options import for_option, given, typed_text
 
     mass = None if args.liquid_mass is None else parse_positive(args.liquid_mass, "--liquid-mass", "mass")
     option, value = given(args, ("--liquid-temperature", "temperature"), ("--liquid-pressure", "pressure"))
-    with for_option(option):
+    with for_option(option, typed_text(args, option), value):
         result = (flash.flash_at_temperature if option == "--liquid-temperature" else flash.flash_at_pressure)(value, mass)
     warnings = [
         "The fraction is the adiabatic ideal: snow horns and bags collect less, since some snow is "

@@ -53,7 +53,7 @@ def vessel_state(args: argparse.Namespace):
     t = _temperature(parse(args.temperature, "--temperature", "temperature"))
     if args.pressure is not None:
         p = parse_positive(args.pressure, "--pressure", "pressure")
-        with for_option("--pressure"):
+        with for_option("--pressure", args.pressure, p):
             return co2.vessel_by_pressure(volume, p, t)
     m = parse_positive(args.mass, "--mass", "mass")
     with for_option("--mass"):

@@ -14,6 +14,7 @@ from typing import Any
 
 from textual import work
 
+from co2routes.sources.filewrite import AlreadyExists, updated_text, writable
 from co2routes.thermo.errors import InputError
 from co2routes.tui.screens.dialogs import ConfirmDialog, PathDialog
 from co2routes.tui.session import ChangedOnDisk, Opened, export, export_format, open_file, save
@@ -43,6 +44,10 @@ def json_text(record: dict[str, Any]) -> str:
 
 class Filing:
     """Open, save, save-as and export actions; the screen provides the document and messages."""
+
+    def failed(self, what: str, err: Exception) -> None:
+        """Say that a file action failed: briefly on the status line, in full in a notice."""
+        self._fail(f"{what}: {err}")
 
     # -- open -----------------------------------------------------------------------------
 
@@ -127,15 +132,15 @@ class Filing:
         replace = False
         while True:
             try:
-                stamp = save(path, self.document, expected=expected, replace=replace)
+                stamp = save(path, self.document, expected=expected, replace=replace, base=self.opened.text)
                 break
             except ChangedOnDisk:
                 question = f"{path} was changed on disk since it was opened. Replace it with this scenario?"
-            except InputError as err:
-                if replace or not exists(path) or not str(err).endswith("allow replacing it"):
-                    self._fail(f"not saved: {err}")
-                    return
+            except AlreadyExists:
                 question = f"{path} already exists. Replace it?"
+            except InputError as err:
+                self.failed("not saved", err)
+                return
             except Exception as err:  # noqa: BLE001 - a failed save keeps the scenario on screen
                 self._fail(f"not saved: {path}: {type(err).__name__}: {err}")
                 return
@@ -143,9 +148,8 @@ class Filing:
                 self._say("not saved")
                 return
             replace = True
-        from co2routes.sources.scenario import to_toml
-
-        self.opened = Opened(dict(self.document), to_toml(self.document), path, stamp, str(path))
+        self.opened = Opened(dict(self.document), updated_text(self.opened.text, self.document), path, stamp,
+                             str(path))
         self.dirty = False
         self._title()
         self._say(f"saved {path}")
@@ -209,6 +213,10 @@ class Filing:
         except Exception as err:  # noqa: BLE001 - a failed export is a message
             self._fail(f"not exported: {err}")
             return
+        why = writable(name)
+        if why is not None:
+            self.failed("not exported", InputError(name, f"cannot be written: {why}"))
+            return
         replace = False
         if exists(name):
             if not await self.app.push_screen_wait(ConfirmDialog(f"{name} already exists. Replace it?")):
@@ -218,6 +226,6 @@ class Filing:
         try:
             export(name, text, replace=replace)
         except Exception as err:  # noqa: BLE001 - a failed export keeps the scenario on screen
-            self._fail(f"not exported: {err}")
+            self.failed("not exported", err)
             return
         self._say(f"exported {what} to {name}")

@@ -19,16 +19,18 @@ BUILT_IN = (
     ("up / down", "in the ranking: choose a route; in a dialog: move"),
     ("left / right", "in the detail tabs: previous / next tab"),
     ("enter", "in a dialog: OK"),
-    ("escape", "close a dialog or this screen"),
+    ("escape", "in a dialog or this screen: close it"),
     ("y / n", "answer a question (no is the default)"),
     ("mouse", "click a column heading to sort by it; click a tab or a field"),
 )
 
 ABOUT = (
-    "Type into any field: the routes are ranked again as you type. A value that cannot be used "
-    "is marked under its field with the reason, and the last good results stay on screen. "
-    "Clearing a field uses the default shown greyed. Cautions for the chosen route stay at the "
-    "bottom right; follow local codes and licensed practice."
+    "The first field has the focus at start: type, and the routes are ranked again as you type. "
+    "Esc leaves a field for the routes; F2 goes back to the fields, F3 to the routes, F4 to the "
+    "chosen route's tabs. The pane holding the focus has a double frame; the field has a bar on "
+    "its left. A value that cannot be used is marked under its field with the reason, and the last "
+    "good results stay on screen. Clearing a field uses the default shown greyed. Cautions for the "
+    "chosen route stay at the bottom; follow local codes and licensed practice."
 )
 
 

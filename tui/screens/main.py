@@ -28,17 +28,26 @@ from co2routes.tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES, WhatIf
 from co2routes.tui.screens.working import Working
 from co2routes.tui.session import Opened, edited, value_at
 from co2routes.tui.widgets.detail import TABS, CautionPanel, RouteDetail
+from co2routes.tui.widgets.fitting import shorten
 from co2routes.tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
 from co2routes.tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
 from co2routes.tui.widgets.use import add_use_panel, show_use, sync_use_fields
+
+
+#: The keys a new user needs first, always on the bottom line (F1 lists every key).
+KEY_HINT = "F1 keys  F2 inputs  F3 routes  F4 detail  Esc leave field  ^S save  ^Q quit"
 
 
 class MainScreen(Filing, Working, WhatIf, Screen):
     """The one working screen."""
 
     CSS_PATH = "main.tcss"
-    AUTO_FOCUS = "#ranking"
+    AUTO_FOCUS = "ScenarioForm Input"
     BINDINGS = [
+        Binding("f2", "pane('form')", "go to the scenario's inputs (a narrow screen opens them)", priority=True),
+        Binding("f3", "pane('ranking')", "go to the routes", priority=True),
+        Binding("f4", "pane('detail')", "go to the chosen route's tabs", priority=True),
+        Binding("escape", "leave_field", "leave the field you are typing in (to the routes)"),
         Binding("f1,question_mark", "app.keys", "keys and help"),
         Binding("ctrl+s", "save", "save the scenario"),
         Binding("ctrl+n", "save_as", "save the scenario under a new name"),
@@ -48,7 +57,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         Binding("ctrl+g", "next_pane", "go to the next pane: inputs, ranking, detail"),
         Binding("ctrl+f", "fill", "detail fills the screen (cautions stay); again: back"),
         Binding(SPREAD_KEY, "draw_samples", f"draw {SPREAD_SAMPLES} samples of the uncertain inputs: every "
-                "route's spread of cost and chance of being the cheapest (Spread tab)"),
+                "route's cost range and chance of being the cheapest (Cost range tab)"),
     ] + [Binding(str(i + 1), f"tab({i})", f"detail tab: {title}") for i, (_, title) in enumerate(TABS)]
 
     def __init__(self, opened: Opened, routes: Sequence[Any] | None = None,
@@ -71,6 +80,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self.generation = 0
         self.book: Any = None
         self._extras = False
+        self._said: tuple[str, bool] = ("starting…", False)
         self._busy_timer: Any = None
         self.tornadoes = {}
 
@@ -92,7 +102,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         with Horizontal(id="status-line"):
             yield Static("starting…", id="status")
             yield ProgressBar(total=None, show_eta=False, show_percentage=False, id="busy")
-            yield Static(f"F1 every key · {SPREAD_KEY} spread · ctrl+s save · ctrl+q quit", id="key-hint")
+        yield Static(KEY_HINT, id="key-hint")
 
     def on_mount(self) -> None:
         form = self.query_one(ScenarioForm)
@@ -100,13 +110,22 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         add_use_panel(form, self.document)
         self._title()
         self.query_one("#busy").display = False
+        self.call_after_refresh(self.action_pane, "form")
         self.recompute(self.document, self.generation, None)
 
     def on_resize(self) -> None:
         self.set_class(self.size.width < 110, "-narrow")
         self.set_class(self.size.height < 32, "-short")
+        self._title()
+        self._say(*self._said)
         if self.outcome is not None:
             self._weights_line()
+
+    def on_descendant_focus(self) -> None:
+        # a narrow screen shows the form only while one of its fields has the focus
+        focused = self.focused
+        self.set_class(focused is not None and any(isinstance(a, ScenarioForm) for a in focused.ancestors),
+                       "-editing")
 
     def action_fill(self) -> None:
         """Give the route detail the whole screen but the cautions, or give the room back."""
@@ -126,8 +145,9 @@ class MainScreen(Filing, Working, WhatIf, Screen):
             return
         self._idle()
         form = self.query_one(ScenarioForm)
-        for field, reason in refusal_marks(form.fields, err, edited_field):
-            form.mark(field, reason)
+        for field, reason in refusal_marks(form.fields, err, edited_field, self.document):
+            if reason is None or form.row_of(field) is not None:
+                form.mark(field, reason)
         kept = "kept the last good results" if self.outcome else "no results yet"
         self._say(f"{err} — {kept}", True)
 
@@ -148,7 +168,8 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         comparison = outcome.comparison
         table = self.query_one(RankingTable)
         table.show(comparison.rows)
-        table.border_title = f"Routes, best first · {comparison.end_product} · prices in {comparison.currency}"
+        table.border_title = (f"Routes, best first · per kg of {comparison.end_product.replace('-', ' ')} · "
+                             f"prices in {comparison.currency}")
         self._weights_line()
         self._show_selected()
         self._title()
@@ -193,7 +214,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         comparison = self.outcome.comparison
         curve = self.breakthrough.get(row.result.route_id) if row is not None else None
         self.query_one(RouteDetail).show(row, comparison.currency, comparison.end_product, curve)
-        self.query_one(CautionPanel).show(row)
+        self.query_one(CautionPanel).show(row, comparison.rows)
 
     def _weights_line(self) -> None:
         weights = self.outcome.comparison.weights
@@ -210,15 +231,21 @@ class MainScreen(Filing, Working, WhatIf, Screen):
 
     def _title(self) -> None:
         name = clean_text(str(self.document.get("name", "unnamed scenario")))
-        where = clean_text(str(self.opened.path)) if self.opened.path else "invented demo, not yet saved"
+        where = clean_text(str(self.opened.path)) if self.opened.path else "not yet saved to a file"
         mark = "  ● edited" if self.dirty else ""
+        room = max(20, self.size.width - 2 - len("co2routes │   │ ") - len(mark))
+        name = shorten(name, max(12, room - len(where)))
         self.query_one("#title-line", Static).update(
-            Text.assemble(("co2routes ", "bold"), ("│ ", "dim"), name, ("  │ ", "dim"), (where, "italic"),
-                          (mark, "bold")))
+            Text.assemble(("co2routes ", "bold"), ("│ ", "dim"), name, ("  │ ", "dim"),
+                          (shorten(where, room - len(name)), "italic"), (mark, "bold")))
 
     def _say(self, message: str, warn: bool = False) -> None:
+        """Put ``message`` on the status line, shortened at a word to fit (it is said whole
+        elsewhere: under the field, or in a notice)."""
+        self._said = (message, warn)
         status = self.query_one("#status", Static)
-        status.update(Text(clean_text(message), style="bold" if warn else ""))
+        room = max(20, self.size.width - 2 - (20 if self.query_one("#busy").display else 0))
+        status.update(Text(shorten(clean_text(message), room), style="bold" if warn else ""))
         status.set_class(warn, "-warn")
 
     def _fail(self, message: str) -> None:
@@ -276,18 +303,33 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         """Open detail tab ``index``."""
         self.query_one(RouteDetail).pick(index)
 
+    def action_pane(self, which: str) -> None:
+        """Move the focus to the form (its first field, or the one last left), the ranking or the
+        detail tabs; a narrow screen opens the form first."""
+        if which == "form":
+            self.add_class("-editing")
+            form = self.query_one(ScenarioForm)
+            boxes = form.query(Input)
+            last = getattr(self, "_last_field", None)
+            target = last if last is not None and last in boxes else (boxes.first() if boxes else None)
+            if target is not None:
+                self.call_after_refresh(target.focus)
+        elif which == "detail":
+            self.query_one(RouteDetail).query_one("Tabs").focus()
+        else:
+            self.query_one(RankingTable).focus()
+
+    def action_leave_field(self) -> None:
+        """Leave the field being typed in for the ranking (Escape); elsewhere Escape does nothing."""
+        focused = self.focused
+        if isinstance(focused, Input) and any(isinstance(a, ScenarioForm) for a in focused.ancestors):
+            self._last_field = focused
+            self.query_one(RankingTable).focus()
+
     def action_next_pane(self) -> None:
         """Move the focus to the next pane: inputs, ranking, detail tabs."""
-        panes = [self.query_one(ScenarioForm), self.query_one(RankingTable), self.query_one(RouteDetail)]
+        panes = [(ScenarioForm, "form"), (RankingTable, "ranking"), (RouteDetail, "detail")]
         focused = self.focused
-        current = next((i for i, p in enumerate(panes) if focused is not None
-                        and (focused is p or p in focused.ancestors)), -1)
-        target = panes[(current + 1) % len(panes)]
-        if isinstance(target, ScenarioForm):
-            boxes = target.query(Input)
-            if boxes:
-                boxes.first().focus()
-        elif isinstance(target, RouteDetail):
-            target.query_one("Tabs").focus()
-        else:
-            target.focus()
+        current = next((i for i, (kind, _) in enumerate(panes) if focused is not None
+                        and (isinstance(focused, kind) or any(isinstance(a, kind) for a in focused.ancestors))), -1)
+        self.action_pane(panes[(current + 1) % len(panes)][1])

@@ -4,7 +4,7 @@
   (:func:`co2routes.sources.sensitivity.route_sensitivity`). Worked out lazily, in an exclusive thread
   worker: when the tab is opened, and again after an edit or a new route choice only while the tab
   is open. An answer is kept per (ranking generation, route), so going back to the tab costs nothing.
-- **Uncertainty** (the "Spread" tab, key :data:`SPREAD_KEY`): a Monte Carlo run of every route
+- **Uncertainty** (the "Cost range" tab, key :data:`SPREAD_KEY`): a Monte Carlo run of every route
   (:func:`co2routes.sources.uncertainty.uncertainty`) with a fresh seed, in an exclusive thread worker that
   moves the tab's progress bar; a newer run or leaving the screen stops it at its next step.
 
@@ -128,12 +128,17 @@ class WhatIf:
         ranges = (f"ranges: {named} from the scenario's [uncertain] table, else " if named else "ranges: ") + \
             (f"prices x{p_lo:g}..x{p_hi:g}, fractions -/+{points:g} points, temperatures -/+{dt:g} K, "
              f"demand x{f_lo:g}..x{f_hi:g}")
-        self.query_one(TornadoPanel).show(self.tornadoes[key], self.outcome.comparison.currency, ranges)
+        from co2routes.sources.registry import catalogue
+        from co2routes.tui.typed import typed_units
+
+        route = self.tornadoes[key]
+        units = typed_units(self.outcome.scenario, self.routes or catalogue().routes, [s.name for s in route.inputs])
+        self.query_one(TornadoPanel).show(route, self.outcome.comparison.currency, ranges, units)
 
     # -- uncertainty ----------------------------------------------------------------------
 
     def action_draw_samples(self) -> None:
-        """Run the Monte Carlo of every route and open the Spread tab."""
+        """Run the Monte Carlo of every route and open the Cost range tab."""
         if self.outcome is None:
             self._say("no ranking yet: the samples are drawn once the routes are ranked", True)
             return

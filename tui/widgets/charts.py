@@ -2,18 +2,52 @@
 worker (see :mod:`co2routes.tui.compute`) and only draws it; an empty chart says why it is empty.
 
 Titles and axis labels are kept short, the unit on its axis: plotext leaves out a title or label
-wider than the chart, and these charts are often narrow."""
+wider than the chart, and these charts are often narrow. Every line of a chart has its own mark
+(:data:`MARKS`), so they can be told apart without colour, and the key saying which mark is which
+sits under the chart (:class:`Keyed`), never over the plotted lines."""
 
 from __future__ import annotations
 
 import math
 from typing import Any, Sequence
 
+from rich.text import Text
+from textual.app import ComposeResult
+from textual.containers import Vertical
+from textual.widgets import Static
 from textual_plotext import PlotextPlot
 
 from co2routes.tui.widgets import css_of
+from co2routes.tui.widgets.fitting import shorten
 
 _CSS = css_of(__file__)
+#: The marks of a chart's lines, one each, in order: distinct without colour.
+MARKS = ("●", "x", "+", "o", "*", "#", "=", "%", "@")
+
+
+class Keyed(Vertical):
+    """A chart with its key under it: which mark stands for which line (outside the plot)."""
+
+    DEFAULT_CSS = ("Keyed { width: 1fr; height: 1fr; min-width: 30; } Keyed > .chart-key { height: auto; } "
+                   "Keyed > PlotextPlot { min-height: 6; }")
+
+    def __init__(self, chart: "_Chart", **kwargs: Any) -> None:
+        super().__init__(**kwargs)
+        self._chart = chart
+
+    def compose(self) -> ComposeResult:
+        yield self._chart
+        yield Static(classes="chart-key")
+
+    def show_key(self, legend: Sequence[tuple[str, str]], note: str = "") -> None:
+        """Write the key: ``mark label`` pairs, then ``note``."""
+        text = Text()
+        for mark, label in legend:
+            text.append(f"{mark} ", style="bold")
+            text.append(f"{label}   ")
+        if note:
+            text.append(note, style="dim")
+        self.query_one(".chart-key", Static).update(text)
 
 
 class _Chart(PlotextPlot):
@@ -32,9 +66,15 @@ class _Chart(PlotextPlot):
         plt.title(title)
         return plt
 
+    def _key(self, legend: Sequence[tuple[str, str]] = (), note: str = "") -> None:
+        """Show the key under the chart (when it sits in a :class:`Keyed`)."""
+        if isinstance(self.parent, Keyed):
+            self.parent.show_key(legend, note)
+
     def empty(self, why: str) -> None:
         """Show no data, only ``why``."""
         self._start(why)
+        self._key()
         self.showing = "empty"
         self.refresh()
 
@@ -48,26 +88,41 @@ class CostCurve(_Chart):
             self.empty("cost per kg against batch size: no routes to draw")
             return
         plt = self._start("cost per kg against batch size")
-        drawn = 0
+        known = [y for costs in sweep.cost_per_kg.values() for y in costs
+                 if y is not None and math.isfinite(y) and y > 0]
+        # log scales drawn as log10 of the data with ticks labelled in the data's own numbers:
+        # plotext's own log scale takes the log again each time the chart is drawn (a resize)
+        log_y = bool(known) and max(known) > 20 * min(known)  # one dear route would flatten the rest
+        legend = []
         for rid, costs in sweep.cost_per_kg.items():
-            pts = [(x, y) for x, y in zip(sweep.co2_kg, costs) if y is not None and math.isfinite(y)]
+            pts = [(math.log10(x), math.log10(y) if log_y else y) for x, y in zip(sweep.co2_kg, costs)
+                   if y is not None and math.isfinite(y) and x > 0 and (y > 0 or not log_y)]
             if pts:
-                plt.plot([p[0] for p in pts], [p[1] for p in pts], label=sweep.labels.get(rid, rid)[:22],
-                         marker="braille")
-                drawn += 1
+                mark = MARKS[len(legend) % len(MARKS)]
+                plt.plot([p[0] for p in pts], [p[1] for p in pts], marker=mark)
+                legend.append((mark, shorten(sweep.labels.get(rid, rid), 24)))
+        drawn = len(legend)
         if not drawn:
             self.empty("cost per kg against batch size: every price is unknown")
             return
-        plt.xscale("log")
-        known = [y for costs in sweep.cost_per_kg.values() for y in costs if y and math.isfinite(y) and y > 0]
-        if known and max(known) > 20 * min(known):
-            plt.yscale("log")  # one dear route would flatten all the others
-        plt.xlabel("kg CO2 per batch")
+        _log_ticks(plt.xticks, [x for x in sweep.co2_kg if x > 0])
+        if log_y:
+            _log_ticks(plt.yticks, known)
+        plt.xlabel("kg CO2 per batch (log scale)")
         plt.ylabel(f"{sweep.currency}/kg")
         if current_kg:
-            plt.vline(current_kg, "gray")
+            plt.vline(math.log10(current_kg), "gray")
+        self._key(legend, "upright line: this scenario's batch" if current_kg else "")
         self.showing = f"cost curve of {drawn} routes"
         self.refresh()
+
+
+def _log_ticks(set_ticks: Any, values: Sequence[float]) -> None:
+    """Ticks at 1, 2, 5 x 10^k on an axis drawn as log10 of ``values``, labelled in the values."""
+    from co2routes.tui.widgets.spread import log_ticks
+
+    ticks = log_ticks(min(values), max(values))
+    set_ticks([math.log10(t) for t in ticks], [f"{t:g}" for t in ticks])
 
 
 class SaturationPlot(_Chart):
@@ -80,9 +135,12 @@ class SaturationPlot(_Chart):
             return
         plt = self._start("CO2 saturation line")
         plt.plot([t - 273.15 for t in curve.temperatures_k], [p / 1e5 for p in curve.pressures_pa],
-                 label="saturation", marker="braille")
-        for label, t, p in curve.marks:
-            plt.scatter([t - 273.15], [p / 1e5], label=f"{label} {p / 1e5:.1f} bar", marker="●")
+                 marker="braille")
+        legend = [("⠒⠒", "liquid and gas meet")]
+        for (label, t, p), mark in zip(curve.marks, MARKS):
+            plt.scatter([t - 273.15], [p / 1e5], marker=mark)
+            legend.append((mark, f"{label} {p / 1e5:.1f} bar"))
+        self._key(legend)
         plt.xlabel("degC")
         plt.ylabel("bar")
         self.showing = "saturation line with " + ", ".join(m[0] for m in curve.marks)
@@ -111,7 +169,7 @@ class Bars(_Chart):
 
     def draw(self, title: str, names: Sequence[str], values: Sequence[float]) -> None:
         """Draw one bar per name; nothing to draw gives an empty chart saying so."""
-        pairs = [(n[:18], v) for n, v in zip(names, values) if v is not None and math.isfinite(v)]
+        pairs = [(shorten(n, 18), v) for n, v in zip(names, values) if v is not None and math.isfinite(v)]
         if not pairs:
             self.empty(f"{title}: nothing known to draw")
             return

@@ -23,12 +23,17 @@ from co2routes.sources.records import heat_words
 from co2routes.thermo.cautions import LOCAL_CODES
 from co2routes.tui.output import format_value, label_of
 from co2routes.tui.widgets import css_of
-from co2routes.tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, SaturationPlot
+from co2routes.tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, Keyed, SaturationPlot
 from co2routes.tui.widgets.whatif import SpreadPanel, TornadoPanel
 
 #: The tabs, in order: (id, title). Digits 1-7 pick them.
 TABS = (("t-batch", "Batch"), ("t-gas", "Gas & dryer"), ("t-delivery", "Delivery"),
-        ("t-costs", "Costs"), ("t-curve", "Cost vs batch"), ("t-whatif", "What if"), ("t-spread", "Spread"))
+        ("t-costs", "Costs"), ("t-curve", "Cost by size"), ("t-whatif", "What if"), ("t-spread", "Cost range"))
+
+
+#: What a route gives, by its ``delivers`` value, in words.
+HANDS_OVER = {"raw-gas": "wet raw gas at about 1 atm, to be dried", "gas": "dry gas, bought",
+              "liquid": "liquid CO2 in a cylinder, bought", "dry-ice": "dry ice, bought"}
 
 
 def _table(*headings: str) -> Table:
@@ -121,7 +126,8 @@ def recipe(row: Any, currency: str) -> Group:
         buy.add_row(g.name, g.formula, _n(g.mass_kg), "–" if g.volume_l is None else f"{g.volume_l:.2f}",
                     _n(g.pure_mass_kg),
                     _n(costs.get(g.name), "{:.2f}"))
-    parts: list[Any] = [Text(f"{r.label}: {r.co2_kg:.3f} kg CO2 delivered, {r.co2_generated_kg:.3f} kg made"
+    got = "made" if r.delivers == "raw-gas" else "bought"
+    parts: list[Any] = [Text(f"{r.label}: {r.co2_kg:.3f} kg CO2 delivered, {r.co2_generated_kg:.3f} kg {got}"
                              f" (rank {row.rank}, score {row.score:.3f}: 0 best, 1 worst)", style="bold"), buy]
     if r.byproducts:
         left = _table("left over", "formula", "kg", "note")
@@ -160,13 +166,15 @@ def gas(row: Any) -> Group:
 def delivery(row: Any, end_product: str) -> Group:
     """The Delivery tab's text: compression, storage and dry ice when the scenario asks."""
     r = row.result
-    parts: list[Any] = [Text(f"end product {end_product}; this route hands over {r.delivers}", style="bold")]
+    parts: list[Any] = [Text(f"end product {end_product}; this route gives "
+                             f"{HANDS_OVER.get(r.delivers, r.delivers)}", style="bold")]
     result = getattr(r, "delivery", None)
     if result is None:
         need = "none needed: gas at about 1 atm" if end_product == "gas" else "no delivery result"
         parts.append(Text(f"compression, storage, dry ice: {need}", style="dim"))
         return Group(*parts)
-    parts.append(facts(result))
+    # a step the product does not go through is left out, not shown as "unknown"
+    parts.append(facts(result, skip=tuple(f for f in ("liquefaction", "flash") if getattr(result, f, 1) is None)))
     for f in dataclasses.fields(result) if dataclasses.is_dataclass(result) else ():
         value = getattr(result, f.name)
         if dataclasses.is_dataclass(value):
@@ -201,13 +209,17 @@ class CautionPanel(VerticalScroll):
     def compose(self) -> ComposeResult:
         yield Static(Text(LOCAL_CODES), id="caution-text")
 
-    def show(self, row: Any | None) -> None:
-        """Show the cautions of ``row`` (always with the local-codes reminder)."""
+    def show(self, row: Any | None, rows: Any = ()) -> None:
+        """Show the cautions of ``row`` (always with the local-codes reminder); a warning other
+        ``rows`` share is said once, with the routes it concerns."""
         lines: list[Any] = [Text("⚠ Cautions", style="bold")]
         if row is not None:
             r = row.result
             lines.append(Text.assemble(("hazard ", "bold"), (f"{r.hazard}", "bold"), f": {r.hazard_reason}"))
-            lines += [Text(f"! {w}", style="yellow") for w in r.warnings]
+            for w in r.warnings:
+                others = [o.result.route_id for o in rows if o is not row and w in o.result.warnings]
+                lines.append(Text.assemble((f"! {w}", "yellow"),
+                                           (f" (also {', '.join(others)})" if others else "", "dim")))
             cautions = list(r.cautions)
             for extra in (getattr(r, "dryer", None), getattr(r, "delivery", None)):
                 cautions += [c for c in getattr(extra, "cautions", ()) if c not in cautions]
@@ -232,13 +244,13 @@ class RouteDetail(Vertical):
             with TabPane(TABS[2][1], id=TABS[2][0]):
                 with Horizontal(classes="split"):
                     yield VerticalScroll(Static(id="delivery"))
-                    yield SaturationPlot(id="saturation")
+                    yield Keyed(SaturationPlot(id="saturation"))
             with TabPane(TABS[3][1], id=TABS[3][0]):
                 with Horizontal(classes="split"):
                     yield VerticalScroll(Static(id="costs"))
                     yield Bars(id="cost-bars")
             with TabPane(TABS[4][1], id=TABS[4][0]):
-                yield CostCurve(id="cost-curve")
+                yield Keyed(CostCurve(id="cost-curve"))
             with TabPane(TABS[5][1], id=TABS[5][0]):
                 yield TornadoPanel(id="whatif")
             with TabPane(TABS[6][1], id=TABS[6][0]):

@@ -21,6 +21,7 @@ from textual.widgets import Input, Label, Static
 from co2routes.tui.fields import Field
 from co2routes.tui.session import value_at
 from co2routes.tui.widgets import css_of
+from co2routes.tui.widgets.fitting import shorten
 
 
 @dataclass
@@ -32,7 +33,8 @@ class FieldEdited(Message):
 
 
 class FieldRow(Vertical):
-    """One field: its label with the unit hint, the input, and a line for its error."""
+    """One field: its label, the input and a line for its error. What may be typed is shown on
+    the form's bottom frame while the field has the focus (so a label never wraps)."""
 
     def __init__(self, field: Field, text: str) -> None:
         super().__init__(classes="field-row")
@@ -43,7 +45,7 @@ class FieldRow(Vertical):
 
     def compose(self) -> ComposeResult:
         f = self.field
-        yield Label(Text.assemble(f.label, ("  ", ""), (f"[{f.hint}]", "dim")), classes="field-label")
+        yield Label(f.label, classes="field-label")
         suggester = SuggestFromList(f.choices, case_sensitive=False) if f.choices else None
         yield Input(self._text, placeholder=f.default, id=f.widget_id, compact=True,
                     suggester=suggester, select_on_focus=False, tooltip=f"{f.dotted}: {f.hint}")
@@ -110,6 +112,14 @@ class ScenarioForm(VerticalScroll):
     def marked(self) -> dict[str, str]:
         """Dotted path -> reason, for every field showing an error."""
         return {row.field.dotted: row.reason or "" for row in self.query(FieldRow) if row.has_class("-bad")}
+
+    def on_descendant_focus(self, event: Any) -> None:
+        row = event.widget.parent
+        if isinstance(row, FieldRow):
+            self.border_subtitle = shorten(f"type: {row.field.hint}", max(8, self.size.width - 4))
+
+    def on_descendant_blur(self) -> None:
+        self.border_subtitle = ""
 
     @on(Input.Changed)
     def _changed(self, event: Input.Changed) -> None:

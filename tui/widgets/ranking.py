@@ -18,6 +18,7 @@ from textual.message import Message
 from textual.widgets import DataTable
 
 from co2routes.tui.widgets import css_of
+from co2routes.tui.widgets.fitting import fit_columns, shorten
 
 
 @dataclass
@@ -36,7 +37,8 @@ class WeightNudged(Message):
 
 
 def _heat_per_kg(row: Any) -> float:
-    return row.result.heat_kj / row.result.co2_kg
+    """kJ per kg of end product, as the command line's heat column."""
+    return row.result.heat_kj / row.result.per_kg_basis
 
 
 @dataclass(frozen=True)
@@ -59,7 +61,7 @@ COLUMNS: tuple[Column, ...] = (
     Column("cost", "cost/kg", lambda r: r.cost_per_kg, "{:.2f}", criterion="cost"),
     Column("energy", "kWh/kg", lambda r: r.result.energy_kwh_per_kg, "{:.2f}", criterion="energy"),
     Column("time", "hours", lambda r: r.result.time_h, "{:.1f}", criterion="time"),
-    Column("heat", "kJ/kg", _heat_per_kg, "{:+.0f}", criterion="heat",
+    Column("heat", "heat kJ/kg", _heat_per_kg, "{:+.0f}", criterion="heat",
            sort_by=lambda r: abs(_heat_per_kg(r))),
     Column("water", "H2O g/kg", lambda r: r.result.water_g_per_kg_co2, "{:.1f}", criterion="water"),
     Column("purity", "CO2 %", lambda r: r.result.raw_gas.co2_mole_fraction, "{:.1%}", True,
@@ -67,8 +69,6 @@ COLUMNS: tuple[Column, ...] = (
     Column("hazard", "hazard", lambda r: r.result.hazard, "{:d}", criterion="hazard"),
 )
 COLUMN_BY_KEY = {c.key: c for c in COLUMNS}
-#: Width of the route column [cells]; longer labels end in an ellipsis (the detail has them whole).
-ROUTE_WIDTH = 18
 
 
 def cell_text(column: Column, row: Any) -> str:
@@ -110,9 +110,21 @@ class RankingTable(DataTable):
         self.descending = False
         self.selected: str | None = None
 
-    def on_mount(self) -> None:
-        for column in COLUMNS:
-            self.add_column(column.heading, key=column.key, width=ROUTE_WIDTH if column.key == "route" else None)
+    def on_resize(self) -> None:
+        if getattr(self, "_all", None) is not None:
+            self.show(self._all)
+
+    def _layout(self, ordered: list[Any]) -> tuple[list[Column], int]:
+        """The columns that fit the table's width now and the route column's width: the least
+        important go first when narrow, the route names get their whole length when wide
+        (:func:`co2routes.tui.widgets.fitting.fit_columns`)."""
+        texts = {c.key: [cell_text(c, r) for r in ordered] for c in COLUMNS}
+        widths = {c.key: max([len(c.heading) + 2 * (c.key == self.sort_key)] + [len(t) for t in texts[c.key]])
+                  for c in COLUMNS}
+        room = self.size.width - 1 or self.app.size.width  # 1: the scrollbar's column
+        keys, route = fit_columns(widths, room, keep=(self.sort_key,),
+                                  route_need=max((len(t) for t in texts["route"]), default=0))
+        return [COLUMN_BY_KEY[k] for k in keys], route
 
     def show(self, rows: tuple[Any, ...]) -> None:
         """Show ``rows`` (a comparison's rows) in the current sort order, keeping the selection."""
@@ -129,28 +141,31 @@ class RankingTable(DataTable):
         if reverse and column.key == "route":
             ordered.reverse()
         self.rows_shown = ordered
-        self.clear()
+        shown, route_width = self._layout(ordered)
+        layout = (tuple(c.key for c in shown), route_width, self.sort_key, self.descending)
+        self.clear(columns=layout != getattr(self, "_layout_now", None))  # columns only when they change
+        if layout != getattr(self, "_layout_now", None):
+            self._layout_now = layout
+            for c in shown:
+                self.add_column(self._heading(c), key=c.key, width=route_width if c.key == "route" else None)
         for row in ordered:
             cells = []
-            for c in COLUMNS:
+            for c in shown:
                 text = cell_text(c, row)
                 style = "bold" if row.rank == 1 else ""
-                if c.key == "route" and len(text) > ROUTE_WIDTH:
-                    text = text[: ROUTE_WIDTH - 1] + "…"
+                if c.key == "route":
+                    text = shorten(text, route_width)
                 cells.append(Text(text, style=style, justify="left" if c.key == "route" else "right"))
             self.add_row(*cells, key=row.result.route_id)
-        self._label_headers()
         if ordered:
             ids = [r.result.route_id for r in ordered]
             index = ids.index(self.selected) if self.selected in ids else 0
             self.move_cursor(row=index, animate=False)
             self.selected = ids[index]
 
-    def _label_headers(self) -> None:
-        for c in COLUMNS:
-            mark = (" ▼" if self.descending else " ▲") if c.key == self.sort_key else ""
-            self.columns[c.key].label = Text(c.heading + mark)
-        self.refresh()
+    def _heading(self, c: Column) -> Text:
+        mark = (" ▼" if self.descending else " ▲") if c.key == self.sort_key else ""
+        return Text(c.heading + mark)
 
     def action_sort(self, key: str) -> None:
         """Sort by column ``key``; the same key again turns the order round."""

@@ -5,7 +5,7 @@ histogram. They only show results worked out by the screen's workers (:mod:`co2r
 
 from __future__ import annotations
 
-from typing import Any
+from typing import Any, Mapping
 
 from rich.console import Group
 from rich.table import Table
@@ -19,16 +19,16 @@ from co2routes.tui.widgets.spread import Spread
 from co2routes.tui.widgets.tornado import Tornado, short_name
 
 
-def span(low: float, high: float, unit: str) -> str:
-    """An input's range in the units of the command line's ``sensitivity`` table (%, degC ...),
-    the unit said once.
+def span(low: float, high: float, unit: str, typed: str | None = None) -> str:
+    """An input's range in the unit it was typed in (``typed``), else in the units of the command
+    line's ``sensitivity`` table (%, degC ...), the unit said once.
 
     >>> span(4.5, 7.5, "per kg"), span(0.85, 0.95, "1"), span(284.15, 294.15, "K")
     ('4.5 .. 7.5 per kg', '85 .. 95 %', '11 .. 21 degC')
     """
-    from co2routes.tui.commands.sensitivity import _shown
+    from co2routes.tui.typed import as_typed
 
-    a, b = _shown(low, unit), _shown(high, unit)
+    a, b = as_typed(low, unit, typed), as_typed(high, unit, typed)
     (a_num, _, a_unit), (b_num, _, b_unit) = a.partition(" "), b.partition(" ")
     try:
         a_num, b_num = f"{float(a_num):.3g}", f"{float(b_num):.3g}"
@@ -37,7 +37,7 @@ def span(low: float, high: float, unit: str) -> str:
     return f"{a_num} .. {b_num} {a_unit}".rstrip() if a_unit == b_unit else f"{a} .. {b}"
 
 
-def swing_table(route: Any, currency: str) -> Table:
+def swing_table(route: Any, currency: str, units: Mapping[str, str] | None = None) -> Table:
     """Each input of a :class:`co2routes.sources.sensitivity.RouteSensitivity`, widest swing first: its range
     and the cost per kg at each end."""
     table = Table("input", "from .. to", f"{currency}/kg", box=None, pad_edge=False, show_edge=False,
@@ -45,7 +45,7 @@ def swing_table(route: Any, currency: str) -> Table:
     for s in route.inputs:
         low = "?" if s.cost_per_kg_low is None else f"{s.cost_per_kg_low:.2f}"
         high = "?" if s.cost_per_kg_high is None else f"{s.cost_per_kg_high:.2f}"
-        table.add_row(short_name(s.name), span(s.low, s.high, s.unit),
+        table.add_row(short_name(s.name), span(s.low, s.high, s.unit, (units or {}).get(s.name)),
                       f"{low} .. {high}")
     return table
 
@@ -70,13 +70,13 @@ class TornadoPanel(VerticalScroll):
         self.query_one("#swings", Static).update("")
         self.query_one(Tornado).empty("no sensitivity to draw")
 
-    def show(self, route: Any, currency: str, ranges: str) -> None:
+    def show(self, route: Any, currency: str, ranges: str, units: Mapping[str, str] | None = None) -> None:
         """Show a :class:`co2routes.sources.sensitivity.RouteSensitivity`; ``ranges`` says where they came from."""
         low, high = Tornado.LOW, Tornado.HIGH
         note = Text.assemble("one input at a time: ", (low, f"bold {low}"), " at its low end, ",
                              (high, f"bold {high}"), " at its high end; figures below")
         self.query_one("#tornado-note", Static).update(note)
-        parts: list[Any] = [swing_table(route, currency)] if route.inputs else \
+        parts: list[Any] = [swing_table(route, currency, units)] if route.inputs else \
             [Text("no input moves this route's cost", style="dim")]
         parts += [Text(ranges, style="dim")] + [Text(f"! {w}", style="yellow") for w in route.warnings]
         self.query_one("#swings", Static).update(Group(*parts))
@@ -84,7 +84,7 @@ class TornadoPanel(VerticalScroll):
 
 
 class SpreadPanel(VerticalScroll):
-    """The "Spread" tab: the Monte Carlo progress bar, the chosen route's percentiles and chance of
+    """The "Cost range" tab: the Monte Carlo progress bar, the chosen route's percentiles and chance of
     being cheapest, the box chart of every route and under it the chosen route's histogram."""
 
     DEFAULT_CSS = css_of(__file__, "whatif-spread.tcss")
