@@ -6,6 +6,7 @@ import tomllib
 import pytest
 
 from co2routes.sources import scenario as sc
+from co2routes.sources.filewrite import write_atomic
 from co2routes.thermo.errors import InputError
 
 
@@ -59,7 +60,7 @@ def test_malformed_toml_names_the_file(tmp_path):
 def test_save_open_round_trip_is_exact(tmp_path):
     doc = tomllib.loads(sc.demo_text())
     path = tmp_path / "copy.toml"
-    sc.write_atomic(path, sc.to_toml(doc))
+    write_atomic(path, sc.to_toml(doc))
     again, _ = sc.read_document(path)
     assert again == doc
 
@@ -68,9 +69,9 @@ def test_write_atomic_never_overwrites_unasked_and_leaves_no_temp(tmp_path):
     path = tmp_path / "s.toml"
     path.write_text("keep me")
     with pytest.raises(InputError):
-        sc.write_atomic(path, "new")
+        write_atomic(path, "new")
     assert path.read_text() == "keep me"
-    sc.write_atomic(path, "new", overwrite=True)
+    write_atomic(path, "new", overwrite=True)
     assert path.read_text() == "new"
     assert [p.name for p in tmp_path.iterdir()] == ["s.toml"]
 
@@ -82,7 +83,7 @@ def test_read_only_folder_is_an_input_error(tmp_path):
     folder.chmod(0o500)
     try:
         with pytest.raises(InputError):
-            sc.write_atomic(folder / "s.toml", "x")
+            write_atomic(folder / "s.toml", "x")
     finally:
         folder.chmod(0o700)
 
