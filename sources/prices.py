@@ -8,7 +8,7 @@ A missing price makes that cost unknown (``None``), never zero.
 from __future__ import annotations
 
 import tomllib
-from dataclasses import dataclass
+from dataclasses import dataclass, field
 from importlib import resources
 from pathlib import Path
 from typing import Any, Iterable, Mapping
@@ -40,6 +40,8 @@ class PriceBook:
 
     currency: str
     prices: Mapping[str, Price]
+    #: the ``[equipment]`` table (:func:`co2routes.sources.equipment.parse_equipment`)
+    equipment: Mapping[str, Any] = field(default_factory=dict)
 
     def get(self, key: str) -> Price | None:
         """The price for ``key`` or ``None`` when unknown."""
@@ -50,7 +52,7 @@ class PriceBook:
         merged = dict(self.prices)
         for key, raw in entries.items():
             merged[key] = parse_price(key, raw, where)
-        return PriceBook(self.currency, merged)
+        return PriceBook(self.currency, merged, self.equipment)
 
 
 def parse_price(key: str, raw: Any, where: str = "prices") -> Price:
@@ -106,7 +108,10 @@ def _book_from_toml(data: Mapping[str, Any], where: str) -> PriceBook:
     prices = data.get("prices", {})
     if not isinstance(prices, Mapping):
         raise InputError(f"{where}: prices", "must be a table of KEY = \"AMOUNT / UNIT\"")
-    return PriceBook(currency.strip(), {}).overridden(prices, f"{where}: prices")
+    from co2routes.sources.equipment import parse_equipment
+
+    equipment = parse_equipment(data.get("equipment", {}), where)
+    return PriceBook(currency.strip(), {}, equipment).overridden(prices, f"{where}: prices")
 
 
 def demo_book() -> PriceBook:
