@@ -67,7 +67,8 @@ ROUTE_GEAR: dict[str, Callable[..., list[tuple[str, str, float]]]] = {
 
 def route_needs(route_id: str, made: RouteResult, schedule, options: Mapping[str, Any],
                 cycles: float) -> list[Need] | None:
-    """The route's own units, or ``None`` when the route is not one this module knows."""
+    """The route's own units, or ``None`` when the route is not one this module knows (a route
+    added by a plug-in: the comparison then says its own units are not counted)."""
     gear = ROUTE_GEAR.get(route_id)
     if gear is None:
         return None

@@ -19,8 +19,8 @@ compressor draws whenever the buffer holds gas (:func:`buffer_mass`). The buffer
 the site's pressure up to :data:`BAG_LIMIT_M3`, else a low-pressure tank at
 :data:`TANK_PRESSURE_PA`.
 
-A demand given as a mass per batch (no period) is one batch made once; the gas end product is
-held until it is used. A bought product needs no making units: its container is its store.
+A demand given as a mass per batch (no period) is one batch made once; a gas end product is used
+as it comes, liquid or dry ice is drawn by the compressors. A bought product needs no making units: its container is its store.
 """
 
 from __future__ import annotations
@@ -109,7 +109,7 @@ def buffer_mass(segments: list[tuple[float, float]], use_kg_s: float | None, dra
     ``use_kg_s``: a steady use (gas end product); the buffer is the range of the cumulative
     difference made - used over a period (steady periodic operation). ``draw_kg_s``: a compressor
     that draws whenever the buffer holds gas; its content is followed over two periods and the
-    second's largest kept. Neither: the whole batch is held (a one-off gas batch).
+    second's largest kept. Neither: the whole batch is held.
 
     >>> buffer_mass([(6.0, 1.0), (18.0, 0.0)], 0.25, None)
     4.5
@@ -174,7 +174,7 @@ def plan_schedule(made: RouteResult, rerun: Callable[[float], RouteResult], dema
     short = limit(made) if limit is not None else ""
     if period_s is None:
         segments = [(t, q / t)]
-        held = buffer_mass(segments, None, draw_kg_s) if draw_kg_s else q
+        held = buffer_mass(segments, None, draw_kg_s) if draw_kg_s else 0.0
         kind, volume, pressure = _store(held, site, made.raw_gas.mole_fractions)
         return Schedule("one batch", 1, q, made.time_h, None, None, q / t, q / t, held, kind,
                         volume, pressure, not short, short)

@@ -66,13 +66,12 @@ def build(route_id: str, scenario, made: RouteResult, run: Callable[[float], Rou
     warnings: list[str] = []
     own = route_needs(route_id, made, schedule, options, cycles)
     if own is None:
-        warnings.append(f"The equipment of route {route_id} is not listed: its owning cost is unknown.")
+        warnings.append(f"The equipment of route {route_id} is not listed: its owning cost counts only "
+                        "the buffer, dryer and delivery.")
     items = price_items((own or []) + plant_needs(schedule, dried.dryer, shown, stores, compressors, draw,
                                                   cycles), scenario.prices.equipment, plant)
     a_year = product_kg * (_YEAR_S / period if period else plant.batches_per_year)
     capital = capital_per_kg(items, a_year, plant)
-    if own is None and not plant.owned:
-        capital = None
     if not schedule.meets_demand:
         warnings.append(f"Cannot keep up with the demand: {schedule.note}.")
     notes = [schedule.note] if schedule.meets_demand and schedule.note else []
