@@ -113,3 +113,20 @@ def co2_refrigeration_duty(condensing_temperature_k: float, site_temperature_k: 
     p = cp.PropsSI("P", "T", condensing_temperature_k, "Q", 0.0, "CO2")
     h_gas = cp.PropsSI("H", "P", p, "T", site_temperature_k, "CO2")
     return h_gas - cp.PropsSI("H", "T", condensing_temperature_k, "Q", 0.0, "CO2")
+
+
+def refrigeration_work_j_per_kg(condensing_temperature_k: float, site_temperature_k: float,
+                                refrigerant: str = REFRIGERANT, **cycle) -> float:
+    """Chiller shaft work per kg of CO2 condensed [J/kg]: duty / COP, 0 when the CO2 condenses
+    at or above the site's temperature (:func:`co2_refrigeration_duty`, :func:`vapour_compression`;
+    ``cycle`` passes the approaches and efficiency).
+
+    >>> refrigeration_work_j_per_kg(293.15, 293.15)
+    0.0
+    >>> round(refrigeration_work_j_per_kg(273.15, 293.15) / 1e3)
+    62
+    """
+    duty = co2_refrigeration_duty(condensing_temperature_k, site_temperature_k)
+    if duty <= 0.0:
+        return 0.0
+    return duty / vapour_compression(condensing_temperature_k, site_temperature_k, refrigerant, **cycle).cop
