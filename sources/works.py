@@ -65,7 +65,7 @@ def build(route_id: str, scenario, made: RouteResult, run: Callable[[float], Rou
     cycles = cycles_a_year(period, schedule.units, schedule.mode == "staggered", plant.batches_per_year)
     warnings: list[str] = []
     own = route_needs(route_id, made, schedule, options, cycles)
-    if own is None:
+    if own is None and schedule.units:
         warnings.append(f"The equipment of route {route_id} is not listed: its owning cost counts only "
                         "the buffer, dryer and delivery.")
     items = price_items((own or []) + plant_needs(schedule, dried.dryer, shown, stores, compressors, draw,
