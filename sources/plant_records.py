@@ -15,7 +15,8 @@ from typing import Any
 
 def plant_record(r: Any) -> dict[str, Any]:
     """The plant keys of a :class:`co2routes.sources.plan.PlannedRoute`."""
-    s, st = r.schedule, r.stores
+    s = r.schedule
+    st = r.stores if r.delivery is not None else None  # a gas end product keeps nothing
     refrigeration = None if st is None else st.refrigeration_kwh / r.product_kg
     return {
         "running_per_kg": r.running_per_kg,
