@@ -297,3 +297,14 @@ def test_plant_keys_are_validated():
     with pytest.raises(InputError) as caught:
         scenario(GROWER, owned="yes")
     assert "plant.owned" in caught.value.field
+
+
+def test_breath_says_what_it_would_take(four):
+    r = next(row.result for row in four["grower"].rows if row.result.route_id == "breath")
+    s = r.schedule
+    # Persily & de Jonge rates give 4 people x 8 h less than 1.5 kg/day: more beds cannot help
+    assert not s.meets_demand
+    needed_h = r.made.time_h - 2.0                      # the route's time less the kiln's 2 h
+    people = math.ceil(4 * needed_h / 8.0)              # people for the 8 h given, by hand
+    assert f"it would take {people} people for 8 h" in s.note
+    assert any(s.note in w for w in r.warnings)
