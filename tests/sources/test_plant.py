@@ -10,8 +10,7 @@ Sources named beside the asserts:
   Eschenbach & Lavelle, *Engineering Economic Analysis*, appendix of interest tables; values
   printed to 4 decimals, from memory) and the worked loan of 10,000 at 12 % over 5 years, yearly
   payment 2,774 (same tables);
-* the refrigeration cycle against CoolProp state points worked by hand here (Moran & Shapiro
-  2006 sec. 10.2) and the Carnot bound;
+* the refrigeration cycle: tests/thermo/test_refrigeration.py;
 * the dryer's water per cycle against demand x cycle x water content (mass balance by hand),
   molar masses IUPAC through ``chemicals``.
 """
@@ -20,7 +19,6 @@ from __future__ import annotations
 
 import math
 
-import CoolProp.CoolProp as CP
 import pytest
 from chemicals.elements import molecular_weight
 from hypothesis import given, settings, strategies as st
@@ -32,7 +30,6 @@ from co2routes.sources.plant import plan_schedule
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import validate
 from co2routes.thermo.errors import InputError
-from co2routes.thermo.refrigeration import vapour_compression
 
 M_W = molecular_weight({"H": 2, "O": 1}) / 1000.0     # kg/mol, IUPAC via `chemicals`
 M_CO2 = molecular_weight({"C": 1, "O": 2}) / 1000.0   # kg/mol, IUPAC via `chemicals`
@@ -75,36 +72,6 @@ def test_capital_recovery_factor_matches_interest_tables(rate, years, table):
 def test_capital_recovery_factor_worked_loan():
     # worked example: 10,000 borrowed at 12 % for 5 years is repaid by 2,774 a year (tables); 1
     assert 10_000 * capital_recovery_factor(0.12, 5) == pytest.approx(2774.0, abs=1.0)
-
-
-# -- refrigeration -------------------------------------------------------------------------------
-
-def test_refrigeration_cycle_against_coolprop_state_points_by_hand():
-    c = vapour_compression(268.15, 293.15, "R134a", evaporator_approach_k=5.0, condenser_approach_k=10.0,
-                           efficiency=0.7)
-    t_e, t_c = 263.15, 303.15
-    h1 = CP.PropsSI("H", "T", t_e, "Q", 1, "R134a")                 # saturated vapour out of the evaporator
-    s1 = CP.PropsSI("S", "T", t_e, "Q", 1, "R134a")
-    p_c = CP.PropsSI("P", "T", t_c, "Q", 0, "R134a")
-    h2 = h1 + (CP.PropsSI("H", "P", p_c, "S", s1, "R134a") - h1) / 0.7
-    h4 = CP.PropsSI("H", "T", t_c, "Q", 0, "R134a")                 # throttled saturated liquid
-    # CoolProp states by hand (Moran & Shapiro 2006 sec. 10.2), 1e-9
-    assert c.cop == pytest.approx((h1 - h4) / (h2 - h1), rel=1e-9)
-    assert c.carnot_cop == pytest.approx(t_e / (t_c - t_e), rel=1e-12)
-
-
-@given(st.floats(min_value=250.0, max_value=290.0), st.floats(min_value=0.0, max_value=15.0),
-       st.floats(min_value=0.4, max_value=1.0))
-@settings(max_examples=25)
-def test_refrigeration_cop_between_zero_and_carnot(cold, lift, efficiency):
-    c = vapour_compression(cold, cold + lift, "R134a", efficiency=efficiency)
-    assert 0.0 < c.cop < c.carnot_cop                                # second law
-
-
-def test_unknown_refrigerant_names_the_key():
-    with pytest.raises(InputError) as caught:
-        vapour_compression(268.15, 293.15, "R-nothing")
-    assert caught.value.field == "plant.refrigerant"
 
 
 # -- the schedule ----------------------------------------------------------------------------------
