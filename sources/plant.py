@@ -166,7 +166,7 @@ def plan_schedule(made: RouteResult, rerun: Callable[[float], RouteResult], dema
     cannot lift (people breathing), an empty string when nothing.
     """
     q = made.co2_kg
-    t = made.time_h * 3600.0
+    t = max(made.time_h * 3600.0, 1.0)  # a batch said to take no time still takes a second
     if made.delivers != "raw-gas":
         mean = q / period_s if period_s else 0.0
         return Schedule("bought", 0, q, made.time_h, None if period_s is None else period_s / 3600.0,
