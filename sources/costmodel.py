@@ -44,11 +44,13 @@ class CostModel:
     keys: tuple[str | None, ...]
     costs: tuple[float | None, ...]
     per_unit: tuple[float | None, ...]
+    #: owning cost per kg (``PlannedRoute.capital_per_kg``), added unchanged by price changes
+    fixed_per_kg: float | None = 0.0
 
     @property
     def known(self) -> bool:
         """True when every line's cost is known."""
-        return all(c is not None for c in self.costs)
+        return all(c is not None for c in self.costs) and self.fixed_per_kg is not None
 
     def cost_per_kg(self, prices: Mapping[str, float], book: PriceBook) -> float | None:
         """Cost per kg with some price amounts replaced (``{key: amount per SI unit}``)."""
@@ -60,7 +62,7 @@ class CostModel:
                 nominal = book.get(key).amount
                 cost = cost * (prices[key] / nominal) if nominal > 0 else unit_cost * prices[key]
             total += cost
-        return total / self.basis_kg
+        return total / self.basis_kg + self.fixed_per_kg
 
 
 def cost_model(result: PlannedRoute, book: PriceBook) -> CostModel:
@@ -79,4 +81,5 @@ def cost_model(result: PlannedRoute, book: PriceBook) -> CostModel:
         per_unit.append(one.cost)
     basis = getattr(result, "per_kg_basis", result.co2_kg)
     return CostModel(result.route_id, basis, tuple(line.item for line in result.costs), keys,
-                     tuple(line.cost for line in result.costs), tuple(per_unit))
+                     tuple(line.cost for line in result.costs), tuple(per_unit),
+                     getattr(result, "capital_per_kg", 0.0))

@@ -51,13 +51,15 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
 
     ``co2_kg`` is the end product wanted (default the scenario's demand); ``options`` override
     the scenario's options for this route. For dry ice the route is asked for the raw CO2 the
-    flash needs (:func:`co2routes.sources.delivery.raw_co2_needed`). The batch's time is the
-    longer of the route's and the compressor's (the compressor draws from a buffer while the gas
-    comes). A user's mistake in an option raises :class:`InputError`; the route's own refusal of
+    flash needs (:func:`co2routes.sources.delivery.raw_co2_needed`). The plant around the batch
+    (schedule, dryer, delivery, stores, equipment, the chain's hazard) comes from
+    :func:`co2routes.sources.works.build`; the batch's time is the longer of one unit's and one
+    compressor's (the compressors draw from a buffer while the gas comes). A user's mistake in an
+    option raises :class:`InputError`; the route's own refusal of
     the scenario raises :class:`RouteRefused` naming the route.
     """
-    from co2routes.sources.conditioning import condition
-    from co2routes.sources.delivery import plan_delivery, raw_co2_needed
+    from co2routes.sources.delivery import raw_co2_needed
+    from co2routes.sources.works import build
 
     given = dict(scenario.options.get(route.id, {}))
     given.update(options or {})
@@ -76,23 +78,25 @@ def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
                                    scenario.delivery, scenario.site)
     if raw_kg != product_kg:
         made = run(raw_kg)
-    dried = condition(made, scenario.dryer, scenario.site)
-    delivery = plan_delivery(product_kg, made.co2_kg, flash, scenario.end_product,
-                             made.delivers, scenario.delivery, scenario.site)
-    uses = made.uses + dried.uses
+    works = build(route.id, scenario, made, run, parsed, product_kg, flash)
+    dried, delivery, stores = works.dried, works.delivery, works.stores
+    uses = made.uses + dried.uses + stores.uses
     if delivery.electricity_kwh > 0:
         uses += (Use("compression (electric motor)", delivery.electricity_kwh, "energy_kwh", "electricity"),)
-    energy = Energy(made.energy.electricity_kwh + dried.electricity_kwh + delivery.electricity_kwh,
-                    made.energy.fuel_kwh, made.energy.heat_kwh)
+    energy = Energy(made.energy.electricity_kwh + dried.electricity_kwh + delivery.electricity_kwh
+                    + stores.refrigeration_kwh, made.energy.fuel_kwh, made.energy.heat_kwh)
     costs = cost_lines(made.reagents, uses, scenario.prices, route_prices(route))
     planned = PlannedRoute(
         route_id=route.id, label=route.label, made=made, product_kg=product_kg, uses=uses,
-        energy=energy, time_h=max(made.time_h, delivery.time_h),
-        warnings=_unique(made.warnings + dried.warnings + delivery.warnings + missing_prices(costs)),
+        energy=energy, time_h=works.time_h,
+        warnings=_unique(made.warnings + dried.warnings + delivery.warnings + works.warnings
+                         + missing_prices(costs)),
         cautions=_unique(made.cautions + dried.cautions + delivery.cautions),
-        notes=_unique(made.notes + delivery.notes),
+        notes=_unique(made.notes + delivery.notes + works.notes),
         dryer=dried.dryer, delivery=delivery if scenario.end_product != "gas" else None,
-        costs=costs)
+        costs=costs, schedule=works.schedule,
+        equipment=works.equipment, capital_per_kg=works.capital_per_kg, stores=stores,
+        hazard_steps=works.hazard_steps)
     check_total(route.id, planned.total_cost)
     return planned
 

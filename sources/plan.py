@@ -40,6 +40,16 @@ class PlannedRoute:
     dryer: Any = None
     delivery: Any = None
     costs: tuple[CostLine, ...] = ()
+    #: the plant over time (:class:`co2routes.sources.plant.Schedule`), ``None`` outside a comparison
+    schedule: Any = None
+    #: what is owned (:class:`co2routes.sources.equipment.Item` lines) and its owning cost per kg
+    #: of end product (0 when owned already or nothing is, ``None`` when a price is unknown)
+    equipment: tuple[Any, ...] = ()
+    capital_per_kg: float | None = 0.0
+    #: refrigeration, cylinders and dry-ice box (:class:`co2routes.sources.stores.Stores`)
+    stores: Any = None
+    #: every step of the chain with its hazard (:class:`co2routes.sources.chain.Step`)
+    hazard_steps: tuple[Any, ...] = ()
 
     # -- the route's own figures, read through -------------------------------------------------
     @property
@@ -84,13 +94,24 @@ class PlannedRoute:
 
     @property
     def hazard(self) -> int:
-        """The route's own hazard level, 1 (low) to 3 (high)."""
-        return self.made.hazard
+        """The whole chain's hazard level, 1 (low) to 3 (high): the highest of its steps (the
+        route's own alone when no steps are known; that stays in ``made.hazard``)."""
+        return self._top().level if self.hazard_steps else self.made.hazard
+
+    @property
+    def hazard_step(self) -> str:
+        """The step that sets :attr:`hazard` (``making``, ``compression``, ...)."""
+        return self._top().step if self.hazard_steps else "making"
 
     @property
     def hazard_reason(self) -> str:
-        """Why the route's hazard is at its level."""
-        return self.made.hazard_reason
+        """Why the chain's hazard is at its level."""
+        return self._top().reason if self.hazard_steps else self.made.hazard_reason
+
+    def _top(self):
+        from co2routes.sources.chain import highest
+
+        return highest(self.hazard_steps)
 
     @property
     def delivers(self) -> str:
@@ -122,10 +143,19 @@ class PlannedRoute:
         return sum(line.cost for line in self.costs)  # type: ignore[misc]
 
     @property
-    def cost_per_kg(self) -> float | None:
-        """Cost per kg of end product, ``None`` if any price is unknown."""
+    def running_per_kg(self) -> float | None:
+        """Running cost (reagents, energy, consumables) per kg of end product, ``None`` if any
+        price is unknown."""
         total = self.total_cost
         return None if total is None else total / self.product_kg
+
+    @property
+    def cost_per_kg(self) -> float | None:
+        """Running plus owning cost per kg of end product, ``None`` if either is unknown."""
+        running = self.running_per_kg
+        if running is None or self.capital_per_kg is None:
+            return None
+        return running + self.capital_per_kg
 
 
 @dataclass(frozen=True, slots=True)

@@ -7,7 +7,7 @@ A missing price makes that cost unknown (``None``), never zero.
 
 from __future__ import annotations
 
-from dataclasses import dataclass, replace
+from dataclasses import dataclass, field, replace
 from importlib import resources
 from pathlib import Path
 from typing import Any, Iterable, Mapping
@@ -40,6 +40,8 @@ class PriceBook:
 
     currency: str
     prices: Mapping[str, Price]
+    #: the ``[equipment]`` table (:func:`co2routes.sources.equipment.parse_equipment`)
+    equipment: Mapping[str, Any] = field(default_factory=dict)
 
     def get(self, key: str) -> Price | None:
         """The price for ``key`` or ``None`` when unknown."""
@@ -52,7 +54,7 @@ class PriceBook:
 
     def with_prices(self, prices: Mapping[str, Price]) -> "PriceBook":
         """A new book with ``prices`` (parsed) replacing or adding entries."""
-        return PriceBook(self.currency, {**self.prices, **prices})
+        return PriceBook(self.currency, {**self.prices, **prices}, self.equipment)
 
 
 def parse_price(key: str, raw: Any, where: str = "prices") -> Price:
@@ -113,7 +115,10 @@ def _book_from_toml(data: Mapping[str, Any], where: str) -> PriceBook:
     prices = data.get("prices", {})
     if not isinstance(prices, Mapping):
         raise InputError(f"{where}: prices", "must be a table of KEY = \"AMOUNT / UNIT\"")
-    return PriceBook(currency.strip(), {}).overridden(prices, f"{where}: prices")
+    from co2routes.sources.equipment import parse_equipment
+
+    equipment = parse_equipment(data.get("equipment", {}), where)
+    return PriceBook(currency.strip(), {}, equipment).overridden(prices, f"{where}: prices")
 
 
 def demo_book() -> PriceBook:

@@ -9,6 +9,7 @@ from typing import Any
 
 from co2routes.sources.pipeline import Comparison
 from co2routes.sources.plan import PlannedRoute
+from co2routes.sources.plant_records import plant_record
 from co2routes.sources.rank import RouteRow
 
 
@@ -34,6 +35,7 @@ def row_record(row: RouteRow) -> dict[str, Any]:
         "product_kg": r.per_kg_basis,
         "dryer": dryer_record(r.dryer),
         "delivery": delivery_record(r.delivery),
+        **plant_record(r),
         "warnings": list(r.warnings),
         "cautions": list(r.cautions),
     }
@@ -151,6 +153,7 @@ def batch_record(result: PlannedRoute, currency: str) -> dict[str, Any]:
         "product_kg": result.per_kg_basis,
         "dryer": dryer_record(result.dryer),
         "delivery": delivery_record(result.delivery),
+        **plant_record(result),
         "notes": list(result.notes),
         "warnings": list(result.warnings),
         "cautions": list(result.cautions),

@@ -23,6 +23,9 @@ Schema (every quantity a string with units)::
     [uncertain] "INPUT" = {dist = ..., ...}: spreads for what-if analysis (co2routes.sources.whatif)
     [use]       kind = greenhouse | fermentation | carbonation | cold-box and its inputs: sets the
                 demand instead of ``demand`` (co2routes.sources.uses)
+    [plant]     interest_rate, years, owned, batches_per_year, filling_ratio, cylinder_size,
+                refrigerant, evaporator_approach, condenser_approach, refrigeration_efficiency
+                (co2routes.sources.plantplan)
 """
 
 from __future__ import annotations
@@ -35,6 +38,7 @@ from typing import Any, Mapping
 
 from co2routes.sources import limits
 from co2routes.sources.base import Site
+from co2routes.sources.plantplan import PlantPlan, validate_plant
 from co2routes.sources.prices import PriceBook, load_book, parse_price
 from co2routes.sources.uses import from_document as use_demand
 from co2routes.thermo.errors import InputError
@@ -46,7 +50,7 @@ DEFAULT_WEIGHTS = {"cost": 3.0, "energy": 1.0, "time": 1.0, "heat": 0.5, "water"
                    "purity": 1.0, "hazard": 2.0}
 DEMOS = {"polytunnel": "demo-polytunnel.toml", "science-fair": "demo-science-fair.toml"}
 _TOP_KEYS = {"name", "note", "demand", "batch", "end_product", "currency", "site", "dryer",
-             "delivery", "weights", "options", "prices", "uncertain", "use"}
+             "delivery", "weights", "options", "prices", "uncertain", "use", "plant"}
 _SECTION_KEYS = {
     "site": {"temperature", "pressure", "air_co2"},
     "dryer": {"desiccant", "target_dew_point", "target_ppmv", "cycle"},
@@ -105,6 +109,8 @@ class Scenario:
     text: str | None = field(default=None, repr=False)
     #: the :class:`co2routes.sources.uses.UseDemand` the demand was worked out from (``None``: given)
     use: Any = None
+    #: the plant's finance, cylinders and refrigeration (:mod:`co2routes.sources.plantplan`)
+    plant: PlantPlan = PlantPlan()
 
 
 def _line_of(text: str | None, section: str | None, key: str) -> int | None:
@@ -310,7 +316,12 @@ def _prices(p: _Parts) -> dict[str, Any]:
 
 #: The readers of a scenario, in order; each returns some of :class:`Scenario`'s fields. A new
 #: table is one more reader here (and its field at the end of :class:`Scenario`).
-READERS = (_demand, _site, _dryer, _delivery, _weights, _options, _prices)
+def _plant(p: _Parts) -> dict[str, Any]:
+    """``[plant]``: finance, cylinders and refrigeration (:func:`co2routes.sources.plantplan.validate_plant`)."""
+    return {"plant": validate_plant(p.document.get("plant", {}), p.where)}
+
+
+READERS = (_demand, _site, _dryer, _delivery, _weights, _options, _prices, _plant)
 
 
 def validate(document: Mapping[str, Any], source: str = "scenario", text: str | None = None,

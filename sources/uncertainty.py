@@ -249,7 +249,8 @@ def _route_costs(model, curves, drawn, prices, book) -> np.ndarray:
             line = line * (sampled / nominal if nominal > 0.0 else sampled)
         total = total + line
     size = len(next(iter(drawn.values()))) if drawn else 1
-    return np.broadcast_to(np.asarray(total / model.basis_kg, dtype=float), (size,)).copy()
+    # the owning cost per kg is held at its nominal value (it does not move with prices)
+    return np.broadcast_to(np.asarray(total / model.basis_kg + model.fixed_per_kg, dtype=float), (size,)).copy()
 
 
 def uncertainty_record(result: Uncertainty) -> dict[str, Any]:

@@ -12,6 +12,7 @@ from typing import Any, Mapping
 from co2routes.sources.pipeline import Comparison
 from co2routes.sources.records import batch_record, comparison_record
 from co2routes.thermo.cautions import LOCAL_CODES
+from co2routes.tui.plant_report import plant_words
 
 #: The comparison's columns: (JSON key, heading, format).
 COLUMNS: tuple[tuple[str, str, str], ...] = (
@@ -137,6 +138,8 @@ def comparison_table(comparison: Comparison) -> str:
                      f"{record['end_product'].replace('-', ' ')}):")
         lines += [f"  {route['id']:<{width}}  {delivery_words(route['delivery'])}"
                   for route in record["routes"]]
+    lines.append("plant per route:")
+    lines += [f"  {route['id']:<{width}}  {plant_words(route)}" for route in record["routes"]]
     lines.append("")
     lines.append("weights: " + ", ".join(f"{k}={v:g}" for k, v in record["weights"].items()))
     lines.append("hazard: 1 low, 2 moderate, 3 high; heat: + takes heat in, - gives heat off")
@@ -163,6 +166,8 @@ def comparison_markdown(comparison: Comparison) -> str:
     out += ["| route | dryer | delivery |", "|---|---|---|"]
     out += [f"| {route['id']} | {bed_words(route['dryer'])} | {delivery_words(route['delivery'])} |"
             for route in record["routes"]]
+    out += ["", "## Plant per route", "", "| route | plant |", "|---|---|"]
+    out += [f"| {route['id']} | {plant_words(route)} |" for route in record["routes"]]
     out.append("")
     out.append("## Cautions")
     out.append("")
@@ -197,6 +202,8 @@ def _flatten(route: Mapping[str, Any]) -> dict[str, Any]:
     for key, value in route.items():
         if key in ("warnings", "cautions"):
             continue
+        if isinstance(value, list):
+            continue  # lists (equipment, hazard steps) are in the JSON only
         if isinstance(value, Mapping):
             out.update({f"{key}_{k}": v for k, v in value.items()})
         elif value is not None or key not in ("dryer", "delivery"):

@@ -101,8 +101,10 @@ def test_batch_shows_the_dryer_and_the_delivery(capsys, fair):
     answer = run_json(capsys, "batch", "fermentation", fair)
     assert answer["end_product"] == "dry-ice" and answer["product_kg"] == 3.0
     assert set(answer["dryer"]) == DRYER_KEYS and set(answer["delivery"]) == DELIVERY_KEYS
-    assert answer["cost_per_kg"] == pytest.approx(
+    assert answer["running_per_kg"] == pytest.approx(
         sum(c["cost"] for c in answer["costs"]) / 3.0, rel=1e-12)  # per kg of dry ice
+    # and the cost ranked on: running plus owning (co2routes.sources.equipment), by hand
+    assert answer["cost_per_kg"] == pytest.approx(answer["running_per_kg"] + answer["capital_per_kg"], rel=1e-12)
     table = run_text(capsys, "batch", "fermentation", fair)
     assert "\ndryer:\n" in table and "\ndelivery:\n" in table and "bed mass" in table
     assert "34.85 bar" in table  # NIST 3.4851 MPa at 0 degC

@@ -57,6 +57,15 @@ def _kj(value: float) -> float:
     return value / 1e3
 
 
+def _with_refrigeration(condensing_k: float, site_k: float, work_j_per_kg: float) -> dict:
+    """Refrigeration work and compressor + refrigeration work of one trade-off row [kJ/kg]
+    (:func:`co2routes.thermo.refrigeration.refrigeration_work_j_per_kg`, default chiller)."""
+    from co2routes.thermo.refrigeration import refrigeration_work_j_per_kg
+
+    chill = refrigeration_work_j_per_kg(condensing_k, site_k)
+    return {"refrigeration_work_kj_per_kg": _kj(chill), "total_work_kj_per_kg": _kj(work_j_per_kg + chill)}
+
+
 def run(args: argparse.Namespace) -> dict:
     """The liquefaction plan as the JSON answer."""
     from co2routes.thermo import cautions, compression, liquefaction
@@ -134,6 +143,8 @@ def run(args: argparse.Namespace) -> dict:
                 "work_kj_per_kg": _kj(r.work_j_per_kg),
                 "discharge_temperature_k": r.discharge_temperature_k,
                 "condenser_heat_kj_per_kg": _kj(r.condenser_heat_j_per_kg),
+                # a chiller takes the heat below the site's (inlet) temperature: its work and the sum
+                **_with_refrigeration(r.condensing_temperature_k, t_in, r.work_j_per_kg),
             }
             for r in tradeoff
         ],

@@ -24,6 +24,7 @@ from co2routes.thermo.cautions import LOCAL_CODES
 from co2routes.tui.output import format_value, label_of
 from co2routes.tui.widgets import css_of
 from co2routes.tui.widgets.charts import Bars, BreakthroughPlot, CostCurve, Keyed, SaturationPlot
+from co2routes.tui.widgets.plant_lines import cost_lines as plant_cost_lines, schedule_lines
 from co2routes.tui.widgets.whatif import SpreadPanel, TornadoPanel
 
 #: The tabs, in order: (id, title). Digits 1-7 pick them.
@@ -141,6 +142,7 @@ def recipe(row: Any, currency: str) -> Group:
     parts += [Text(""), heat,
               Text(f"time {r.time_h:.1f} h   energy {r.energy.electricity_kwh:.3f} kWh electric, "
                    f"{r.energy.fuel_kwh:.3f} kWh fuel, {r.energy.heat_kwh:.3f} kWh heat")]
+    parts += schedule_lines(r)
     parts += [Text(f"note: {n}", style="italic") for n in r.notes]
     return Group(*parts)
 
@@ -198,6 +200,7 @@ def breakdown(row: Any, currency: str) -> Group:
         keys = ", ".join(repr(line.price_key) for line in r.costs if line.cost is None and line.price_key)
         parts.append(Text(f"a price is unknown{' (' + keys + ')' if keys else ''}: give it under Prices in the form",
                           style="yellow"))
+    parts += plant_cost_lines(r, currency)
     return Group(*parts)
 
 
