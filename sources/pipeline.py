@@ -10,15 +10,17 @@ others are still ranked.
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+from dataclasses import dataclass, field
 from typing import Mapping, Sequence
 
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use, parse_options
+from co2routes.sources.choice import check_route_ids, hidden_ids, limit_breaks
 from co2routes.sources.plan import NotApplicable, PlannedRoute
 from co2routes.sources.prices import cost_lines
 from co2routes.sources.rank import RouteRow, rank
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
+from co2routes.sources.value import reference_cost
 from co2routes.thermo.errors import InputError
 
 
@@ -29,7 +31,13 @@ class RouteRefused(InputError):
 @dataclass(frozen=True, slots=True)
 class Comparison:
     """Every route's row, best first, the routes that cannot run with their reasons, the weights
-    used and any route that failed to load or crashed."""
+    used and any route that failed to load or crashed.
+
+    ``limits`` are the hard limits applied (key -> value, :mod:`co2routes.sources.choice`);
+    ``include`` / ``exclude`` the route choice (rows of routes left out are listed as hidden);
+    ``reference_cost`` the cost anchor of the score [currency/kg], ``None`` when the price book has
+    no price of bought CO2 (:func:`co2routes.sources.value.reference_cost`).
+    """
 
     scenario_name: str
     end_product: str
@@ -38,6 +46,10 @@ class Comparison:
     rows: tuple[RouteRow, ...]
     failures: tuple[str, ...]
     not_applicable: tuple[NotApplicable, ...] = ()
+    limits: Mapping[str, float] = field(default_factory=dict)
+    include: tuple[str, ...] | None = None
+    exclude: tuple[str, ...] = ()
+    reference_cost: float | None = None
 
 
 def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
@@ -105,6 +117,7 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
     cat = catalogue()
     chosen = cat.routes if routes is None else tuple(routes)
     check_option_tables(scenario, (*cat.routes, *chosen))
+    check_route_ids(scenario, (r.id for r in (*cat.routes, *chosen)))
     results: list[PlannedRoute] = []
     refused: list[NotApplicable] = []
     failures = list(cat.failures)
@@ -117,9 +130,13 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
             raise
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
             failures.append(f"route {route.id!r} failed: {type(err).__name__}: {err}")
+    reference = reference_cost(scenario.prices, scenario.end_product)
+    breaks = {r.route_id: limit_breaks(r, scenario.limits, scenario.prices.currency) for r in results}
+    rows = rank(results, scenario.weights, reference_cost=reference, breaks=breaks,
+                hidden=hidden_ids(scenario, (r.route_id for r in results)))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
-                      dict(scenario.weights), rank(results, scenario.weights), tuple(failures),
-                      tuple(refused))
+                      dict(scenario.weights), rows, tuple(failures), tuple(refused),
+                      dict(scenario.limits), scenario.include, tuple(scenario.exclude), reference)
 
 
 def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:

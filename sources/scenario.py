@@ -21,6 +21,7 @@ Schema (every quantity a string with units)::
     [options.ROUTE-ID]  KEY = "VALUE" for that route's options
     [prices]    KEY = "AMOUNT / UNIT" overriding the price book
     [uncertain] "INPUT" = {dist = ..., ...}: spreads for what-if analysis (co2routes.sources.whatif)
+    [limits] [routes]  hard limits and the routes compared (co2routes.sources.choice)
 """
 
 from __future__ import annotations
@@ -35,6 +36,7 @@ from pathlib import Path
 from typing import Any, Mapping
 
 from co2routes.sources.base import Site
+from co2routes.sources.choice import scenario_choices
 from co2routes.sources.prices import PriceBook, load_book
 from co2routes.thermo.errors import InputError
 from co2routes.thermo.units import parse, parse_positive
@@ -45,7 +47,7 @@ DEFAULT_WEIGHTS = {"cost": 3.0, "energy": 1.0, "time": 1.0, "heat": 0.5, "water"
                    "purity": 1.0, "hazard": 2.0}
 DEMOS = {"polytunnel": "demo-polytunnel.toml", "science-fair": "demo-science-fair.toml"}
 _TOP_KEYS = {"name", "note", "demand", "batch", "end_product", "currency", "site", "dryer",
-             "delivery", "weights", "options", "prices", "uncertain"}
+             "delivery", "weights", "options", "prices", "uncertain", "limits", "routes"}
 _SECTION_KEYS = {
     "site": {"temperature", "pressure", "air_co2"},
     "dryer": {"desiccant", "target_dew_point", "target_ppmv", "cycle"},
@@ -99,6 +101,10 @@ class Scenario:
     options: Mapping[str, Mapping[str, str]]
     prices: PriceBook
     document: Mapping[str, Any] = field(repr=False, default_factory=dict)
+    #: hard limits and route choice (co2routes.sources.choice): limit key -> value, route ids
+    limits: Mapping[str, float] = field(default_factory=dict)
+    include: tuple[str, ...] | None = None
+    exclude: tuple[str, ...] = ()
 
 
 def _line_of(text: str | None, section: str | None, key: str) -> int | None:
@@ -240,7 +246,7 @@ def validate(document: Mapping[str, Any], source: str = "scenario", text: str | 
         name=str(document.get("name", "unnamed scenario")), note=str(document.get("note", "")),
         co2_kg=co2_kg, batch_s=batch_s, end_product=end_product, site=site, dryer=dryer,
         delivery=delivery, weights=weights, options=options, prices=prices,
-        document=copy.deepcopy(dict(document)),
+        document=copy.deepcopy(dict(document)), **scenario_choices(document, where),
     )
 
 
