@@ -170,3 +170,25 @@ def limit_breaks(result: Any, limits: Mapping[str, float], currency: str = "") -
             side = "below" if key.startswith("min_") else "above"
             out.append(f"{name} {fmt.format(value)}{unit} {side} the limit {shown_limit}")
     return tuple(out)
+
+
+def toggled(table: Mapping[str, Any] | None, route_id: str, hidden: bool) -> dict[str, Any] | None:
+    """The ``[routes]`` table after hiding ``route_id`` (``hidden`` false) or showing it again
+    (``hidden`` true); ``None`` when nothing is left to say.
+
+    >>> toggled(None, "breath", False)
+    {'exclude': ['breath']}
+    >>> toggled({"include": ["purchase"], "exclude": ["breath"]}, "breath", True)
+    {'include': ['purchase', 'breath']}
+    >>> toggled({"exclude": ["breath"]}, "breath", True) is None
+    True
+    """
+    table = table or {}
+    include = None if table.get("include") is None else list(_ids(table["include"], "routes.include"))
+    exclude = [x for x in _ids(table.get("exclude", []), "routes.exclude") if x != route_id]
+    if not hidden:
+        exclude.append(route_id)
+    elif include is not None and route_id not in include:
+        include.append(route_id)
+    out = {k: v for k, v in (("include", include), ("exclude", exclude)) if v is not None and (v or k == "include")}
+    return out or None
