@@ -9,7 +9,7 @@ from typing import Any
 
 from co2routes.sources.pipeline import Comparison
 from co2routes.sources.plan import PlannedRoute
-from co2routes.sources.rank import RouteRow
+from co2routes.sources.rank import RouteRow, why_place
 from co2routes.sources.value import raw_figures
 
 
@@ -122,7 +122,7 @@ def comparison_record(comparison: Comparison) -> dict[str, Any]:
         "limits": dict(comparison.limits),
         "route_choice": {"include": None if comparison.include is None else list(comparison.include),
                          "exclude": list(comparison.exclude)},
-        "routes": [row_record(row) for row in comparison.rows],
+        "routes": [{**row_record(row), "why": why} for row, why in zip(comparison.rows, whys(comparison.rows))],
         "not_applicable": [{"id": n.route_id, "label": n.label, "reason": n.reason}
                            for n in comparison.not_applicable],
         "failures": list(comparison.failures),
@@ -130,6 +130,20 @@ def comparison_record(comparison: Comparison) -> dict[str, Any]:
         "warnings": list(comparison.failures),
         "cautions": list(dict.fromkeys(c for row in comparison.rows for c in row.result.cautions)),
     }
+
+
+def whys(rows: tuple[RouteRow, ...]) -> list[str]:
+    """Each row's place in words: for a ranked route the criteria that set it against its
+    neighbour above (the first: below), else the limits it breaks or that it is hidden."""
+    ranked = [r for r in rows if r.status == "ranked"]
+    out = []
+    for row in rows:
+        if row.status != "ranked":
+            out.append("hidden by the route choice" if row.hidden else "over a limit: " + "; ".join(row.breaks))
+            continue
+        at = ranked.index(row)
+        out.append(why_place(row, ranked[at - 1] if at else None, ranked[at + 1] if at + 1 < len(ranked) else None))
+    return out
 
 
 def batch_record(result: PlannedRoute, currency: str) -> dict[str, Any]:

@@ -10,15 +10,15 @@ from typing import Any, Mapping, Sequence
 from co2routes.sources.scenario import CRITERIA
 
 
-def text_grid(head: Sequence[str], body: Sequence[Sequence[str]]) -> list[str]:
-    """A plain-text table: headings, a rule, rows; the second column left-aligned, the rest right.
+def text_grid(head: Sequence[str], body: Sequence[Sequence[str]], left: Sequence[int] = (1,)) -> list[str]:
+    """A plain-text table: headings, a rule, rows; the columns ``left`` left-aligned, the rest right.
 
     >>> text_grid(["#", "route", "x"], [["1", "ab", "0.5"]])
-    ['#  route  x  ', '-  -----  ---', '1  ab     0.5']
+    ['#  route  x', '-  -----  ---', '1  ab     0.5']
     """
     widths = [max(len(x) for x in col) for col in zip(head, *body)]
-    lines = ["  ".join(h.ljust(w) for h, w in zip(head, widths)), "  ".join("-" * w for w in widths)]
-    lines += ["  ".join(c.rjust(w) if i != 1 else c.ljust(w) for i, (c, w) in enumerate(zip(row, widths)))
+    lines = ["  ".join(h.ljust(w) for h, w in zip(head, widths)).rstrip(), "  ".join("-" * w for w in widths)]
+    lines += ["  ".join(c.ljust(w) if i in left else c.rjust(w) for i, (c, w) in enumerate(zip(row, widths))).rstrip()
               for row in body]
     return lines
 
@@ -66,6 +66,7 @@ def choice_lines(record: Mapping[str, Any]) -> list[str]:
              f"score does not depend on the others; cost scale anchored on {anchor}"]
     if record["limits"]:
         lines.append("limits: " + ", ".join(f"{k} {v:g}" for k, v in record["limits"].items()))
+    lines += [f"why {r['id']}: {r['why']}" for r in record["routes"] if r["status"] == "ranked"]
     lines += [f"over a limit: {r['id']}: {'; '.join(r['breaks'])}" for r in record["routes"]
               if r["status"] == "over limit"]
     hidden = [r["id"] for r in record["routes"] if r["status"] == "hidden"]

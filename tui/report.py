@@ -129,7 +129,8 @@ def comparison_table(comparison: Comparison) -> str:
              f"every per-kg figure is per kg of {record['end_product'].replace('-', ' ')}"]
     lines += text_grid(headings(record["end_product"]), _rows(record))
     lines += ["", "why each place: the share of the score (0 worst .. 1 best) each criterion adds"]
-    lines += text_grid(*reason_rows(record))
+    head, body = reason_rows(record)
+    lines += text_grid(head, body, left=(1, len(head) - 1))
     lines += [""] + choice_lines(record)
     lines.append("")
     lines.append("dryer per route:")

@@ -19,7 +19,7 @@ from textual.app import ComposeResult
 from textual.containers import Horizontal, Vertical, VerticalScroll
 from textual.widgets import Static, TabbedContent, TabPane
 
-from co2routes.sources.records import heat_words
+from co2routes.sources.records import heat_words, whys
 from co2routes.thermo.cautions import LOCAL_CODES
 from co2routes.tui.output import format_value, label_of
 from co2routes.tui.widgets import css_of
@@ -116,25 +116,20 @@ def place_lines(row: Any, rows: Any = ()) -> list[Text]:
     """Where the route stands and why: place and score, the share each criterion adds, the
     criteria that set it against its neighbour above (:func:`co2routes.sources.rank.why_place`),
     and whether another route beats it on every criterion."""
-    from co2routes.sources.rank import why_place
-
     place = ("hidden (listed, not ranked)" if row.rank is None else f"rank {row.rank} of {len(rows) or 1}"
              + (" — over a limit: " + "; ".join(row.breaks) if row.breaks else ""))
     standing = ("not ranked, so not compared" if row.status != "ranked" else "non-dominated: no route is as good "
-                "on every criterion" if row.dominated_by is None else f"dominated by {row.dominated_by}: "
+                "everywhere and better somewhere" if row.dominated_by is None else f"dominated by {row.dominated_by}: "
                 "no worse on any criterion")
     parts = " + ".join(f"{k} {v:.3f}" for k, v in row.score_parts.items() if v > 0) or "nothing"
     lines = [Text.assemble((f"{place} · score {row.score:.3f}", "bold"), " (0 worst .. 1 best)"),
              Text(f"score parts: {parts}"), Text(f"standing: {standing}")]
-    if row.hidden:
-        why = "hidden by the route choice ([routes] in the scenario); the hide/show key brings it back"
-    elif row.breaks:
-        why = "after every route within the limits: " + "; ".join(row.breaks)
-    else:
-        ranked = [r for r in rows if r.status == "ranked"]
-        at = next((n for n, r in enumerate(ranked) if r.result.route_id == row.result.route_id), 0)
-        why = why_place(row, ranked[at - 1] if at > 0 else None, ranked[at + 1] if at + 1 < len(ranked) else None)
-    lines.insert(2, Text.assemble(("why this place: ", "bold"), why))
+    ids = [r.result.route_id for r in rows]
+    if row.result.route_id in ids:
+        why = whys(tuple(rows))[ids.index(row.result.route_id)]
+        if row.hidden:
+            why += " ([routes] in the scenario); the hide/show key brings it back"
+        lines.insert(2, Text.assemble(("why this place: ", "bold"), why))
     return lines
 
 
