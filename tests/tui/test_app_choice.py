@@ -6,7 +6,7 @@ import io
 import tomllib
 
 from rich.console import Console
-from textual.widgets import Static
+from textual.widgets import Input, Static
 
 from apphelp import settle, table_cells, table_ids, write_scenario
 from doubles import routes as doubles
@@ -56,3 +56,14 @@ async def test_hide_key_hides_and_shows_the_route_and_detail_gives_the_score_par
         assert "routes" not in screen.document
         assert [r.status for r in screen.outcome.comparison.rows] == ["ranked", "ranked"]
         assert table_ids(app)[0] == hidden_id
+
+        # a limit typed in the form: the hazard-2 double goes after the other, marked, with its reason
+        box = screen.query_one("#f-limits--max_hazard", Input)
+        box.focus()
+        await pilot.press("1")
+        await settle(pilot)
+        assert screen.document["limits"] == {"max_hazard": 1}
+        rows = screen.outcome.comparison.rows
+        assert [r.status for r in rows] == ["ranked", "over limit"]
+        assert rows[1].breaks == ("hazard 2 above the limit 1",)
+        assert table_cells(app, rows[1].result.route_id)[0] == "2!"

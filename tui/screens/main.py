@@ -261,7 +261,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self.dirty = True
         self._title()
         self._say(f"{row.result.label} {'shown again' if row.hidden else 'hidden'} ({HIDE_KEY} again: "
-                  f"{'hide' if row.hidden else 'show'}); saved with the scenario under [routes]")
+                  f"{'hide' if row.hidden else 'show'}); kept in the scenario's [routes] table")
         self.start()
 
     @on(WeightNudged)

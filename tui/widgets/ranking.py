@@ -53,8 +53,9 @@ def _heat_per_kg(row: Any) -> float:
 
 
 def _water_per_kg(row: Any) -> float:
-    r = row.result
-    return r.water_g_per_kg_co2 * r.co2_kg / r.per_kg_basis
+    from co2routes.sources.value import raw_figures
+
+    return raw_figures(row.result)["water"]
 
 
 def _place(row: Any) -> str:
