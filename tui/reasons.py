@@ -33,6 +33,17 @@ def markdown_grid(head: Sequence[str], body: Sequence[Sequence[str]]) -> list[st
             + ["| " + " | ".join(row) + " |" for row in body])
 
 
+def place(route: Mapping[str, Any]) -> str:
+    """The rank cell: ``–`` for a hidden route, ``!`` after the rank of one over a limit.
+
+    >>> place({"rank": None, "status": "hidden"}), place({"rank": 5, "status": "over limit"})
+    ('–', '5!')
+    """
+    if route["rank"] is None:
+        return "–"
+    return f"{route['rank']}!" if route["status"] == "over limit" else str(route["rank"])
+
+
 def standing(route: Mapping[str, Any]) -> str:
     """A route's standing in words: hidden, over a limit, beaten by one route, or non-dominated.
 
@@ -51,7 +62,7 @@ def standing(route: Mapping[str, Any]) -> str:
 def reason_rows(record: Mapping[str, Any]) -> tuple[list[str], list[list[str]]]:
     """Headings and rows of the score-parts table: place, route, score, each criterion's share."""
     head = ["#", "route", "score", *[f"+{k}" for k in CRITERIA], "standing"]
-    body = [["–" if r["rank"] is None else str(r["rank"]), r["id"], f"{r['score']:.3f}",
+    body = [[place(r), r["id"], f"{r['score']:.3f}",
              *[f"{r['score_parts'].get(k, 0.0):.3f}" for k in CRITERIA], standing(r)]
             for r in record["routes"]]
     return head, body

@@ -12,7 +12,7 @@ from typing import Any, Mapping
 from co2routes.sources.pipeline import Comparison
 from co2routes.sources.records import batch_record, comparison_record
 from co2routes.thermo.cautions import LOCAL_CODES
-from co2routes.tui.reasons import choice_lines, markdown_grid, reason_rows, text_grid
+from co2routes.tui.reasons import choice_lines, markdown_grid, place, reason_rows, text_grid
 
 #: The comparison's columns: (JSON key, heading, format); ``{p}`` in a heading is the end product
 #: (every per-kg figure is per kg of it, the basis the score uses).
@@ -57,8 +57,8 @@ def cell(key: str, fmt: str, value: Any) -> str:
 
 
 def _rows(record: Mapping[str, Any]) -> list[list[str]]:
-    return [[("–" if route[k] is None else cell(k, f, route[k])) if k == "rank" else cell(k, f, route[k])
-             for k, _, f in COLUMNS] for route in record["routes"]]
+    return [[place(route) if k == "rank" else cell(k, f, route[k]) for k, _, f in COLUMNS]
+            for route in record["routes"]]
 
 
 def grouped_warnings(record: Mapping[str, Any]) -> dict[str, list[str]]:
