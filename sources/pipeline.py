@@ -14,6 +14,7 @@ from dataclasses import dataclass, field
 from typing import Any, Mapping, Sequence
 
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use
+from co2routes.sources.choice import check_route_ids, hidden_ids, limit_breaks
 from co2routes.sources.guard import (check_total, failure_line, named_in, option_table_field, route_options,
                                       run_route)
 from co2routes.sources.plan import NotApplicable, PlannedRoute
@@ -22,6 +23,7 @@ from co2routes.sources.rank import RouteRow, rank
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
 from co2routes.sources.uses import demand_fields
+from co2routes.sources.value import reference_cost
 from co2routes.thermo.errors import InputError
 
 
@@ -32,7 +34,13 @@ class RouteRefused(InputError):
 @dataclass(frozen=True, slots=True)
 class Comparison:
     """Every route's row, best first, the routes that cannot run with their reasons, the weights
-    used and any route that failed to load or crashed."""
+    used and any route that failed to load or crashed.
+
+    ``limits`` are the hard limits applied (key -> value, :mod:`co2routes.sources.choice`);
+    ``include`` / ``exclude`` the route choice (rows of routes left out are listed as hidden);
+    ``reference_cost`` the cost anchor of the score [currency/kg], ``None`` when the price book has
+    no price of bought CO2 (:func:`co2routes.sources.value.reference_cost`).
+    """
 
     scenario_name: str
     end_product: str
@@ -43,6 +51,10 @@ class Comparison:
     not_applicable: tuple[NotApplicable, ...] = ()
     #: the demand per day and where it came from (:func:`co2routes.sources.uses.demand_fields`)
     demand: Mapping[str, Any] = field(default_factory=dict)
+    limits: Mapping[str, float] = field(default_factory=dict)
+    include: tuple[str, ...] | None = None
+    exclude: tuple[str, ...] = ()
+    reference_cost: float | None = None
 
 
 def evaluate(route: Route, scenario: Scenario, co2_kg: float | None = None,
@@ -115,6 +127,7 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
     cat = catalogue()
     chosen = cat.routes if routes is None else tuple(routes)
     check_option_tables(scenario, (*cat.routes, *chosen))
+    check_route_ids(scenario, (r.id for r in (*cat.routes, *chosen)))
     results: list[PlannedRoute] = []
     refused: list[NotApplicable] = []
     failures = list(cat.failures)
@@ -127,9 +140,13 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
             raise named_in(scenario, err) from None
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
             failures.append(failure_line(route, err))
+    reference = reference_cost(scenario.prices, scenario.end_product)
+    breaks = {r.route_id: limit_breaks(r, scenario.limits, scenario.prices.currency) for r in results}
+    rows = rank(results, scenario.weights, reference_cost=reference, breaks=breaks,
+                hidden=hidden_ids(scenario, (r.route_id for r in results)))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
-                      dict(scenario.weights), rank(results, scenario.weights), tuple(failures),
-                      tuple(refused), demand_fields(scenario))
+                      dict(scenario.weights), rows, tuple(failures), tuple(refused), demand_fields(scenario),
+                      dict(scenario.limits), scenario.include, tuple(scenario.exclude), reference)
 
 
 def check_option_tables(scenario: Scenario, routes: Sequence[Route]) -> None:

@@ -10,24 +10,38 @@ from typing import Any
 from co2routes.sources.pipeline import Comparison
 from co2routes.sources.plan import PlannedRoute
 from co2routes.sources.plant_records import plant_record
-from co2routes.sources.rank import RouteRow
+from co2routes.sources.rank import RouteRow, why_place
+from co2routes.sources.value import raw_figures
 
 
 def row_record(row: RouteRow) -> dict[str, Any]:
-    """The JSON record of one row (the keys ``compare --json`` prints)."""
+    """The JSON record of one row (the keys ``compare --json`` prints).
+
+    Per-kg figures are per kg of the end product (``heat_kj_per_kg`` the batch's heat, signed as
+    ``heat_kj``; ``water_g_per_kg`` the raw gas's water); ``score`` 0 worst .. 1 best and ``score_parts`` the
+    share each criterion adds to it (:mod:`co2routes.sources.rank`).
+    """
     r = row.result
+    figures = raw_figures(r)
     return {
         "id": r.route_id,
         "label": r.label,
         "rank": row.rank,
+        "status": row.status,
         "score": round(row.score, 6),
+        "score_parts": {k: round(v, 6) for k, v in row.score_parts.items()},
+        "breaks": list(row.breaks),
+        "non_dominated": row.non_dominated,
+        "dominated_by": row.dominated_by,
         "co2_kg": r.co2_kg,
         "cost_per_kg": r.cost_per_kg,
         "energy_kwh_per_kg": r.energy_kwh_per_kg,
         "time_h": r.time_h,
         "reagent_kg_per_kg": r.reagent_kg_per_kg,
         "heat_kj": r.heat_kj,
+        "heat_kj_per_kg": r.heat_kj / r.per_kg_basis,
         "water_g_per_kg_co2": r.water_g_per_kg_co2,
+        "water_g_per_kg": figures["water"],
         "co2_mole_fraction": r.raw_gas.co2_mole_fraction,
         "hazard": r.hazard,
         "hazard_reason": r.hazard_reason,
@@ -106,7 +120,11 @@ def comparison_record(comparison: Comparison) -> dict[str, Any]:
         "end_product": comparison.end_product,
         "currency": comparison.currency,
         "weights": dict(comparison.weights),
-        "routes": [row_record(row) for row in comparison.rows],
+        "reference_cost_per_kg": comparison.reference_cost,
+        "limits": dict(comparison.limits),
+        "route_choice": {"include": None if comparison.include is None else list(comparison.include),
+                         "exclude": list(comparison.exclude)},
+        "routes": [{**row_record(row), "why": why} for row, why in zip(comparison.rows, whys(comparison.rows))],
         "not_applicable": [{"id": n.route_id, "label": n.label, "reason": n.reason}
                            for n in comparison.not_applicable],
         "failures": list(comparison.failures),
@@ -115,6 +133,20 @@ def comparison_record(comparison: Comparison) -> dict[str, Any]:
         "cautions": list(dict.fromkeys(c for row in comparison.rows for c in row.result.cautions)),
         **dict(comparison.demand),
     }
+
+
+def whys(rows: tuple[RouteRow, ...]) -> list[str]:
+    """Each row's place in words: for a ranked route the criteria that set it against its
+    neighbour above (the first: below), else the limits it breaks or that it is hidden."""
+    ranked = [r for r in rows if r.status == "ranked"]
+    out = []
+    for row in rows:
+        if row.status != "ranked":
+            out.append("hidden by the route choice" if row.hidden else "over a limit: " + "; ".join(row.breaks))
+            continue
+        at = ranked.index(row)
+        out.append(why_place(row, ranked[at - 1] if at else None, ranked[at + 1] if at + 1 < len(ranked) else None))
+    return out
 
 
 def batch_record(result: PlannedRoute, currency: str) -> dict[str, Any]:

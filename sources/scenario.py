@@ -26,6 +26,7 @@ Schema (every quantity a string with units)::
     [plant]     interest_rate, years, owned, batches_per_year, filling_ratio, cylinder_size,
                 refrigerant, evaporator_approach, condenser_approach, refrigeration_efficiency
                 (co2routes.sources.plantplan)
+    [limits] [routes]  hard limits and the routes compared (co2routes.sources.choice)
 """
 
 from __future__ import annotations
@@ -38,6 +39,7 @@ from typing import Any, Mapping
 
 from co2routes.sources import limits
 from co2routes.sources.base import Site
+from co2routes.sources.choice import scenario_choices
 from co2routes.sources.plantplan import PlantPlan, validate_plant
 from co2routes.sources.prices import PriceBook, load_book, parse_price
 from co2routes.sources.uses import from_document as use_demand
@@ -50,7 +52,7 @@ DEFAULT_WEIGHTS = {"cost": 3.0, "energy": 1.0, "time": 1.0, "heat": 0.5, "water"
                    "purity": 1.0, "hazard": 2.0}
 DEMOS = {"polytunnel": "demo-polytunnel.toml", "science-fair": "demo-science-fair.toml"}
 _TOP_KEYS = {"name", "note", "demand", "batch", "end_product", "currency", "site", "dryer",
-             "delivery", "weights", "options", "prices", "uncertain", "use", "plant"}
+             "delivery", "weights", "options", "prices", "uncertain", "use", "plant", "limits", "routes"}
 _SECTION_KEYS = {
     "site": {"temperature", "pressure", "air_co2"},
     "dryer": {"desiccant", "target_dew_point", "target_ppmv", "cycle"},
@@ -111,6 +113,10 @@ class Scenario:
     use: Any = None
     #: the plant's finance, cylinders and refrigeration (:mod:`co2routes.sources.plantplan`)
     plant: PlantPlan = PlantPlan()
+    #: hard limits and route choice (co2routes.sources.choice): limit key -> value, route ids
+    limits: Mapping[str, float] = field(default_factory=dict)
+    include: tuple[str, ...] | None = None
+    exclude: tuple[str, ...] = ()
 
 
 def _line_of(text: str | None, section: str | None, key: str) -> int | None:
@@ -321,7 +327,12 @@ def _plant(p: _Parts) -> dict[str, Any]:
     return {"plant": validate_plant(p.document.get("plant", {}), p.where)}
 
 
-READERS = (_demand, _site, _dryer, _delivery, _weights, _options, _prices, _plant)
+def _choices(p: _Parts) -> dict[str, Any]:
+    """``[limits]`` and ``[routes]`` (:func:`co2routes.sources.choice.scenario_choices`)."""
+    return scenario_choices(p.document, p.where)
+
+
+READERS = (_demand, _site, _dryer, _delivery, _weights, _options, _prices, _plant, _choices)
 
 
 def validate(document: Mapping[str, Any], source: str = "scenario", text: str | None = None,

@@ -104,6 +104,12 @@ BASE_FIELDS: tuple[Field, ...] = (
     Field(("delivery", "displacement"), "displacement", "L/min, m**3/h", group="Delivery"),
 ) + tuple(
     Field(("weights", c), c, "number >= 0", kind="number", group="Weights") for c in CRITERIA
+) + (  # hard limits (co2routes.sources.choice); a route over one is listed last with the reason
+    Field(("limits", "max_hazard"), "most hazard", "1, 2 or 3", kind="whole", group="Limits"),
+    Field(("limits", "max_time"), "longest batch", "h, day", group="Limits"),
+    Field(("limits", "min_purity"), "least CO2", "%", group="Limits"),
+    Field(("limits", "max_cost_per_kg"), "most cost", "per kg of product", kind="number", group="Limits"),
+    Field(("limits", "max_capital_per_kg"), "most capital", "per kg of product", kind="number", group="Limits"),
 )
 
 

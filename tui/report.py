@@ -13,20 +13,32 @@ from co2routes.sources.pipeline import Comparison
 from co2routes.sources.records import batch_record, comparison_record
 from co2routes.thermo.cautions import LOCAL_CODES
 from co2routes.tui.plant_report import plant_words
+from co2routes.tui.reasons import choice_lines, markdown_grid, place, reason_rows, text_grid
 
-#: The comparison's columns: (JSON key, heading, format).
+#: The comparison's columns: (JSON key, heading, format); ``{p}`` in a heading is the end product
+#: (every per-kg figure is per kg of it, the basis the score uses).
 COLUMNS: tuple[tuple[str, str, str], ...] = (
     ("rank", "#", "{:d}"),
     ("id", "route", "{}"),
-    ("cost_per_kg", "cost/kg", "{:.2f}"),
-    ("energy_kwh_per_kg", "kWh/kg", "{:.2f}"),
+    ("score", "score", "{:.3f}"),
+    ("cost_per_kg", "cost/kg {p}", "{:.2f}"),
+    ("energy_kwh_per_kg", "kWh/kg {p}", "{:.2f}"),
     ("time_h", "time h", "{:.1f}"),
-    ("reagent_kg_per_kg", "feed kg/kg", "{:.2f}"),
-    ("heat_kj_per_kg", "heat kJ/kg", "{:+.0f}"),
-    ("water_g_per_kg_co2", "water g/kg", "{:.1f}"),
+    ("reagent_kg_per_kg", "feed kg/kg {p}", "{:.2f}"),
+    ("heat_kj_per_kg", "heat kJ/kg {p}", "{:+.0f}"),
+    ("water_g_per_kg", "water g/kg {p}", "{:.1f}"),
     ("co2_mole_fraction", "CO2 %", "{:.1%}"),
     ("hazard", "hazard", "{:d}"),
 )
+
+
+def headings(end_product: str) -> list[str]:
+    """The column headings, the per-kg ones naming the end product.
+
+    >>> headings("dry-ice")[3]
+    'cost/kg dry ice'
+    """
+    return [h.format(p=end_product.replace("-", " ")) for _, h, _ in COLUMNS]
 
 
 def cell(key: str, fmt: str, value: Any) -> str:
@@ -45,12 +57,8 @@ def cell(key: str, fmt: str, value: Any) -> str:
         return str(value)
 
 
-#: Columns worked out from a route's record: heat per kg of end product, as the interface shows it.
-DERIVED = {"heat_kj_per_kg": lambda r: None if not r.get("product_kg") else r["heat_kj"] / r["product_kg"]}
-
-
 def _rows(record: Mapping[str, Any]) -> list[list[str]]:
-    return [[cell(k, f, route[k] if k in route else DERIVED[k](route)) for k, _, f in COLUMNS]
+    return [[place(route) if k == "rank" else cell(k, f, route[k]) for k, _, f in COLUMNS]
             for route in record["routes"]]
 
 
@@ -118,16 +126,15 @@ def delivery_words(delivery: Mapping[str, Any] | None) -> str:
 def comparison_table(comparison: Comparison) -> str:
     """A plain-text table of the ranking, with each route's cautions after it."""
     record = comparison_record(comparison)
-    head = [h for _, h, _ in COLUMNS]
-    body = _rows(record)
-    widths = [max(len(x) for x in col) for col in zip(head, *body)]
-    lines = [f"{record['scenario']}: end product {record['end_product']}, prices in {record['currency']}"]
+    lines = [f"{record['scenario']}: end product {record['end_product']}, prices in {record['currency']}; "
+             f"every per-kg figure is per kg of {record['end_product'].replace('-', ' ')}"]
+    lines += text_grid(headings(record["end_product"]), _rows(record))
+    lines += ["", "why each place: the share of the score (0 worst .. 1 best) each criterion adds"]
+    head, body = reason_rows(record)
+    lines += text_grid(head, body, left=(1, len(head) - 1))
+    lines += [""] + choice_lines(record)
     if not record.get("demand_from", "the scenario").startswith("the scenario"):
         lines.insert(0, f"demand {record['demand_from']}")
-    lines.append("  ".join(h.ljust(w) for h, w in zip(head, widths)))
-    lines.append("  ".join("-" * w for w in widths))
-    lines += ["  ".join(c.rjust(w) if i != 1 else c.ljust(w) for i, (c, w) in enumerate(zip(row, widths)))
-              for row in body]
     lines.append("")
     lines.append("dryer per route:")
     width = max((len(route["id"]) for route in record["routes"]), default=0)
@@ -154,11 +161,13 @@ def comparison_table(comparison: Comparison) -> str:
 def comparison_markdown(comparison: Comparison) -> str:
     """The ranking as a Markdown document (what ``compare --markdown`` prints)."""
     record = comparison_record(comparison)
-    head = [h for _, h, _ in COLUMNS]
     out = [f"# {record['scenario']}", "",
-           f"End product: {record['end_product']}. Prices in {record['currency']}.", "",
-           "| " + " | ".join(head) + " |", "|" + "|".join("---" for _ in head) + "|"]
-    out += ["| " + " | ".join(row) + " |" for row in _rows(record)]
+           f"End product: {record['end_product']}. Prices in {record['currency']}. Every per-kg figure "
+           f"is per kg of {record['end_product'].replace('-', ' ')}.", ""]
+    out += markdown_grid(headings(record["end_product"]), _rows(record))
+    out += ["", "Why each place: the share of the score (0 worst .. 1 best) each criterion adds.", ""]
+    out += markdown_grid(*reason_rows(record))
+    out += [""] + [f"- {line}" for line in choice_lines(record)]
     out += [f"- Not applicable: {n['label']} ({n['id']}): {n['reason']}" for n in record["not_applicable"]]
     out += ["", "Weights: " + ", ".join(f"{k} {v:g}" for k, v in record["weights"].items()) + ".", ""]
     out += [f"Every per-kg figure is per kg of {record['end_product'].replace('-', ' ')}.", ""]
@@ -206,6 +215,8 @@ def _flatten(route: Mapping[str, Any]) -> dict[str, Any]:
             continue  # lists (equipment, hazard steps) are in the JSON only
         if isinstance(value, Mapping):
             out.update({f"{key}_{k}": v for k, v in value.items()})
+        elif isinstance(value, list):
+            out[key] = "; ".join(str(v) for v in value)
         elif value is not None or key not in ("dryer", "delivery"):
             out[key] = value
     return out

@@ -81,9 +81,13 @@ def test_compare_markdown_is_a_table_of_every_route(capsys):
     assert main(["compare", "--markdown"]) == 0
     out = capsys.readouterr().out
     ranked = [line.split("|") for line in out.splitlines() if line.startswith("| ")]
-    ranked = [cells for cells in ranked if cells[1].strip().isdigit()]  # rows of the ranking table
-    assert [int(cells[1]) for cells in ranked] == list(range(1, 8))
-    assert {cells[2].strip() for cells in ranked} == ROUTE_IDS
+    ranked = [cells for cells in ranked if cells[1].strip().isdigit()]  # the ranking, then the score parts
+    assert len(ranked) == 14
+    assert [int(cells[1]) for cells in ranked[:7]] == list(range(1, 8))
+    assert {cells[2].strip() for cells in ranked[:7]} == ROUTE_IDS
+    for table_row, parts_row in zip(ranked[:7], ranked[7:]):  # the same order, score and parts that add up to it
+        assert table_row[2:4] == parts_row[2:4]
+        assert sum(float(x) for x in parts_row[4:11]) == pytest.approx(float(parts_row[3]), abs=4e-3)
     assert "invented" in out.lower()  # the demo says it is invented
 
 

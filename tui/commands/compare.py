@@ -14,15 +14,25 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
     parser.add_argument("scenario", nargs="?", help="scenario TOML file (default: the invented demo)")
     parser.add_argument("--weight", action="append", default=[], metavar="CRITERION=W",
                         help="weight of a criterion in the rank: cost, energy, time, heat, water, purity, hazard")
+    parser.add_argument("--routes", metavar="ID,ID", help="compare only these routes (the others are listed "
+                        "as hidden); replaces the scenario's [routes] include")
+    parser.add_argument("--exclude", action="append", default=[], metavar="ID[,ID]",
+                        help="leave these routes out (listed as hidden); adds to the scenario's [routes] exclude")
+    parser.add_argument("--limit", action="append", default=[], metavar="KEY=VALUE",
+                        help="a hard limit: max_hazard=2, max_time='1 day', min_purity='95 %%', "
+                        "max_cost_per_kg=5, max_capital_per_kg=20 (per kg of end product); a route "
+                        "over a limit is listed after the others with the limit it breaks")
     group = parser.add_mutually_exclusive_group()
     group.add_argument("--csv", action="store_true", help="print CSV")
     group.add_argument("--markdown", action="store_true", help="print Markdown")
 
 
 def load_scenario(args: argparse.Namespace):
-    """The scenario named on the command line (or the demo), with ``--weight`` applied."""
+    """The scenario named on the command line (or the demo), with ``--weight``, ``--routes``,
+    ``--exclude`` and ``--limit`` applied."""
     import dataclasses
 
+    from co2routes.sources.choice import with_choices
     from co2routes.sources.scenario import CRITERIA, demo, load
     from co2routes.thermo.errors import InputError
 
@@ -41,6 +51,8 @@ def load_scenario(args: argparse.Namespace):
             raise InputError("--weight", "must be CRITERION=NUMBER, e.g. cost=3", got=repr(item)) from None
         if not 0 <= weights[key] <= MAX_WEIGHT:  # also refuses nan and inf
             raise InputError("--weight", f"a weight must be a number from 0 to {MAX_WEIGHT:g}", got=repr(item))
+    scenario = with_choices(scenario, getattr(args, "routes", None), getattr(args, "exclude", ()),
+                            getattr(args, "limit", ()))
     return dataclasses.replace(scenario, weights=weights)
 
 

@@ -27,10 +27,10 @@ from co2routes.tui.screens.filing import Filing
 from co2routes.tui.screens.whatif import SPREAD_KEY, SPREAD_SAMPLES, WhatIf
 from co2routes.tui.screens.working import Working
 from co2routes.tui.session import Opened, edited, value_at
-from co2routes.tui.widgets.detail import TABS, CautionPanel, RouteDetail
+from co2routes.tui.widgets.detail import TABS, CautionPanel, RouteDetail, set_aside
 from co2routes.tui.widgets.fitting import shorten
 from co2routes.tui.widgets.form import FieldEdited, FieldRow, ScenarioForm
-from co2routes.tui.widgets.ranking import RankingTable, RouteChosen, WeightNudged
+from co2routes.tui.widgets.ranking import HIDE_KEY, RankingTable, RouteChosen, RouteToggled, WeightNudged
 from co2routes.tui.widgets.use import add_use_panel, show_use, sync_use_fields
 
 
@@ -175,7 +175,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self._title()
         left_out = [f"{n.label}: {n.reason}" for n in comparison.not_applicable] + list(comparison.failures)
         note = f"; {len(left_out)} route(s) not ranked: " + " | ".join(left_out) if left_out else ""
-        ranked = f"{len(comparison.rows)} routes ranked in {outcome.seconds:.2f} s{note}"
+        ranked = f"{len(comparison.rows)} routes ranked in {outcome.seconds:.2f} s{note}{set_aside(comparison.rows)}"
         if self.notice:
             self._say(f"{self.notice} · {ranked}", True)
         else:
@@ -213,7 +213,8 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         row = self.selected_row()
         comparison = self.outcome.comparison
         curve = self.breakthrough.get(row.result.route_id) if row is not None else None
-        self.query_one(RouteDetail).show(row, comparison.currency, comparison.end_product, curve)
+        self.query_one(RouteDetail).show(row, comparison.currency, comparison.end_product, curve,
+                                         rows=comparison.rows)
         self.query_one(CautionPanel).show(row, comparison.rows)
 
     def _weights_line(self) -> None:
@@ -226,7 +227,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
             line.append(f"{key} {value:g}", style=style)
             line.append(" " if narrow else "  ")
         if not self.has_class("-narrow"):
-            line.append("(sort: r c e t h w p z · weight: + -)", style="dim")
+            line.append(f"(sort: r c e t h w p z · weight: + - · hide/show: {HIDE_KEY})", style="dim")
         self.query_one("#weights-line", Static).update(line)
 
     def _title(self) -> None:
@@ -277,6 +278,21 @@ class MainScreen(Filing, Working, WhatIf, Screen):
     @on(TabbedContent.TabActivated, "#detail-tabs")
     def _tab_opened(self, event: TabbedContent.TabActivated) -> None:
         self.whatif_tab_opened(str(event.pane.id))
+
+    @on(RouteToggled)
+    def _toggled(self, event: RouteToggled) -> None:
+        from co2routes.sources.choice import toggled
+
+        row = next((r for r in self.outcome.comparison.rows if r.result.route_id == event.route_id), None)
+        if row is None:
+            return
+        table = toggled(value_at(self.document, ("routes",)), event.route_id, row.hidden)
+        self.document = edited(self.document, ("routes",), table)
+        self.dirty = True
+        self._title()
+        self._say(f"{row.result.label} {'shown again' if row.hidden else 'hidden'} ({HIDE_KEY} again: "
+                  f"{'hide' if row.hidden else 'show'}); kept in the scenario's [routes] table")
+        self.start()
 
     @on(WeightNudged)
     def _nudged(self, event: WeightNudged) -> None:

@@ -19,7 +19,7 @@ from textual.app import ComposeResult
 from textual.containers import Horizontal, Vertical, VerticalScroll
 from textual.widgets import Static, TabbedContent, TabPane
 
-from co2routes.sources.records import heat_words
+from co2routes.sources.records import heat_words, whys
 from co2routes.thermo.cautions import LOCAL_CODES
 from co2routes.tui.output import format_value, label_of
 from co2routes.tui.widgets import css_of
@@ -118,8 +118,42 @@ def dryer_table(dryer: Any) -> Table:
     return table
 
 
-def recipe(row: Any, currency: str) -> Group:
-    """The Batch tab: what to buy and weigh, what is left, heat, time and energy."""
+def place_lines(row: Any, rows: Any = ()) -> list[Text]:
+    """Where the route stands and why: place and score, the share each criterion adds, the
+    criteria that set it against its neighbour above (:func:`co2routes.sources.rank.why_place`),
+    and whether another route beats it on every criterion."""
+    place = ("hidden (listed, not ranked)" if row.rank is None else f"rank {row.rank} of {len(rows) or 1}"
+             + (" — over a limit: " + "; ".join(row.breaks) if row.breaks else ""))
+    standing = ("not ranked, so not compared" if row.status != "ranked" else "non-dominated: no route is as good "
+                "everywhere and better somewhere" if row.dominated_by is None else f"dominated by {row.dominated_by}: "
+                "no worse on any criterion")
+    parts = " + ".join(f"{k} {v:.3f}" for k, v in row.score_parts.items() if v > 0) or "nothing"
+    lines = [Text.assemble((f"{place} · score {row.score:.3f}", "bold"), " (0 worst .. 1 best)"),
+             Text(f"score parts: {parts}"), Text(f"standing: {standing}")]
+    ids = [r.result.route_id for r in rows]
+    if row.result.route_id in ids:
+        why = whys(tuple(rows))[ids.index(row.result.route_id)]
+        if row.hidden:
+            why += " ([routes] in the scenario); the hide/show key brings it back"
+        lines.insert(2, Text.assemble(("why this place: ", "bold"), why))
+    return lines
+
+
+def set_aside(rows: Any) -> str:
+    """The routes hidden or over a limit, counted for the status line (empty when none).
+
+    >>> from types import SimpleNamespace as S
+    >>> set_aside([S(status="hidden"), S(status="over limit"), S(status="ranked")])
+    '; 1 hidden, 1 over a limit (listed last)'
+    """
+    hidden = sum(r.status == "hidden" for r in rows)
+    over = sum(r.status == "over limit" for r in rows)
+    return f"; {hidden} hidden, {over} over a limit (listed last)" if hidden or over else ""
+
+
+def recipe(row: Any, currency: str, rows: Any = ()) -> Group:
+    """The Batch tab: where the route stands and why, what to buy and weigh, what is left, heat,
+    time and energy."""
     r = row.result
     buy = _table("buy and weigh", "formula", "kg", "L", "pure kg", currency)
     costs = {line.item: line.cost for line in r.costs}
@@ -128,8 +162,8 @@ def recipe(row: Any, currency: str) -> Group:
                     _n(g.pure_mass_kg),
                     _n(costs.get(g.name), "{:.2f}"))
     got = "made" if r.delivers == "raw-gas" else "bought"
-    parts: list[Any] = [Text(f"{r.label}: {r.co2_kg:.3f} kg CO2 delivered, {r.co2_generated_kg:.3f} kg {got}"
-                             f" (rank {row.rank}, score {row.score:.3f}: 0 best, 1 worst)", style="bold"), buy]
+    parts: list[Any] = [Text(f"{r.label}: {r.co2_kg:.3f} kg CO2 delivered, {r.co2_generated_kg:.3f} kg {got}",
+                             style="bold"), *place_lines(row, rows), Text(""), buy]
     if r.byproducts:
         left = _table("left over", "formula", "kg", "note")
         for b in r.byproducts:
@@ -194,8 +228,9 @@ def breakdown(row: Any, currency: str) -> Group:
         table.add_row(item, _n(line.amount), line.unit, _n(line.unit_price, "{:.4g}"),
                       _n(line.cost, "{:.2f}"))
     total = r.total_cost
+    product = "CO2 gas" if r.delivery is None else r.delivery.end_product.replace("-", " ")
     parts: list[Any] = [table, Text(f"batch {_n(total, '{:.2f}')} {currency}, "
-                                    f"{_n(r.cost_per_kg, '{:.2f}')} {currency} per kg CO2", style="bold")]
+                                    f"{_n(r.cost_per_kg, '{:.2f}')} {currency} per kg of {product}", style="bold")]
     if total is None:
         keys = ", ".join(repr(line.price_key) for line in r.costs if line.cost is None and line.price_key)
         parts.append(Text(f"a price is unknown{' (' + keys + ')' if keys else ''}: give it under Prices in the form",
@@ -259,14 +294,16 @@ class RouteDetail(Vertical):
             with TabPane(TABS[6][1], id=TABS[6][0]):
                 yield SpreadPanel(id="spread")
 
-    def show(self, row: Any | None, currency: str, end_product: str, curve: Any = None) -> None:
+    def show(self, row: Any | None, currency: str, end_product: str, curve: Any = None,
+             rows: Any = ()) -> None:
         """Fill every tab from ``row`` (a comparison row), or say that nothing is selected;
-        ``curve`` is its dryer's breakthrough curve (:func:`co2routes.tui.compute.breakthrough_points`)."""
+        ``curve`` is its dryer's breakthrough curve (:func:`co2routes.tui.compute.breakthrough_points`);
+        ``rows`` every row of the comparison (for the "why this place" line)."""
         if row is None:
             for name in ("recipe", "gas", "delivery", "costs"):
                 self.query_one(f"#{name}", Static).update(Text("no route to show", style="dim"))
             return
-        self.query_one("#recipe", Static).update(recipe(row, currency))
+        self.query_one("#recipe", Static).update(recipe(row, currency, rows))
         self.query_one("#gas", Static).update(gas(row))
         self.query_one("#delivery", Static).update(delivery(row, end_product))
         self.query_one("#costs", Static).update(breakdown(row, currency))

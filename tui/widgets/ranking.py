@@ -3,7 +3,9 @@
 The table shows the numbers of :class:`co2routes.sources.pipeline.Comparison` rows as they are; sorting only
 changes the order shown, never the rank (which comes from the weighted score). Moving the cursor
 selects a route (:class:`RouteChosen`); ``+`` / ``-`` change the weight of the criterion the
-table is sorted by (:class:`WeightNudged`).
+table is sorted by (:class:`WeightNudged`); :data:`HIDE_KEY` hides or shows the selected route
+(:class:`RouteToggled`): a hidden route stays listed, unranked. Per-kg columns are per kg of the end
+product, the basis of the score.
 """
 
 from __future__ import annotations
@@ -36,9 +38,34 @@ class WeightNudged(Message):
     delta: float
 
 
+@dataclass
+class RouteToggled(Message):
+    """The user asked to hide route ``route_id`` if shown, or show it if hidden."""
+
+    route_id: str
+
+
+#: The key that hides or shows the route under the cursor.
+HIDE_KEY = "v"
+
+
 def _heat_per_kg(row: Any) -> float:
     """kJ per kg of end product, as the command line's heat column."""
     return row.result.heat_kj / row.result.per_kg_basis
+
+
+def _water_per_kg(row: Any) -> float:
+    """g of water per kg of end product, the score's basis."""
+    from co2routes.sources.value import raw_figures
+
+    return raw_figures(row.result)["water"]
+
+
+def _place(row: Any) -> str:
+    """The rank, ``–`` for a hidden route, with ``!`` after it when a limit is broken."""
+    if row.rank is None:
+        return "–"
+    return f"{row.rank}!" if row.breaks else str(row.rank)
 
 
 @dataclass(frozen=True)
@@ -56,17 +83,18 @@ class Column:
 
 
 COLUMNS: tuple[Column, ...] = (
-    Column("rank", "#", lambda r: r.rank, "{:d}"),
+    Column("rank", "#", _place, "{}", sort_by=lambda r: r.rank if r.rank is not None else 10**6),
     Column("route", "route", lambda r: r.result.label, "{}"),
     Column("cost", "cost/kg", lambda r: r.cost_per_kg, "{:.2f}", criterion="cost"),
     Column("energy", "kWh/kg", lambda r: r.result.energy_kwh_per_kg, "{:.2f}", criterion="energy"),
     Column("time", "hours", lambda r: r.result.time_h, "{:.1f}", criterion="time"),
     Column("heat", "heat kJ/kg", _heat_per_kg, "{:+.0f}", criterion="heat",
            sort_by=lambda r: abs(_heat_per_kg(r))),
-    Column("water", "H2O g/kg", lambda r: r.result.water_g_per_kg_co2, "{:.1f}", criterion="water"),
+    Column("water", "H2O g/kg", _water_per_kg, "{:.1f}", criterion="water"),
     Column("purity", "CO2 %", lambda r: r.result.raw_gas.co2_mole_fraction, "{:.1%}", True,
            criterion="purity"),
     Column("hazard", "hazard", lambda r: r.result.hazard, "{:d}", criterion="hazard"),
+    Column("score", "score", lambda r: r.score, "{:.3f}", True),
 )
 COLUMN_BY_KEY = {c.key: c for c in COLUMNS}
 
@@ -74,7 +102,7 @@ COLUMN_BY_KEY = {c.key: c for c in COLUMNS}
 def cell_text(column: Column, row: Any) -> str:
     """The text of one cell (``unknown`` when the value is).
 
-    >>> cell_text(COLUMN_BY_KEY["rank"], type("R", (), {"rank": 2})())
+    >>> cell_text(COLUMN_BY_KEY["rank"], type("R", (), {"rank": 2, "breaks": ()})())
     '2'
     """
     value = column.read(row)
@@ -101,6 +129,7 @@ class RankingTable(DataTable):
         Binding("z", "sort('hazard')", "sort by hazard"),
         Binding("plus,equals_sign", "nudge(0.5)", "weigh the sorted criterion more"),
         Binding("minus", "nudge(-0.5)", "weigh the sorted criterion less"),
+        Binding(HIDE_KEY, "toggle_route", "hide the selected route, or show it again (it stays listed)"),
     ]
 
     def __init__(self, **kwargs: Any) -> None:
@@ -152,7 +181,7 @@ class RankingTable(DataTable):
             cells = []
             for c in shown:
                 text = cell_text(c, row)
-                style = "bold" if row.rank == 1 else ""
+                style = "bold" if row.rank == 1 else "dim" if row.rank is None or row.breaks else ""
                 if c.key == "route":
                     text = shorten(text, route_width)
                 cells.append(Text(text, style=style, justify="left" if c.key == "route" else "right"))
@@ -181,6 +210,11 @@ class RankingTable(DataTable):
                         severity="warning", timeout=4)
             return
         self.post_message(WeightNudged(criterion, delta))
+
+    def action_toggle_route(self) -> None:
+        """Hide the selected route, or show it again."""
+        if self.selected is not None:
+            self.post_message(RouteToggled(self.selected))
 
     @on(DataTable.RowHighlighted)
     def _highlighted(self, event: DataTable.RowHighlighted) -> None:
