@@ -13,7 +13,7 @@ from doubles import routes as doubles
 from co2routes.sources.rank import why_place
 from co2routes.sources.scenario import demo_text
 from co2routes.tui.app import Co2RoutesApp
-from co2routes.tui.widgets.ranking import COLUMNS, HIDE_KEY
+from co2routes.tui.widgets.ranking import HIDE_KEY, RankingTable
 
 
 def _recipe_text(app) -> str:
@@ -36,7 +36,7 @@ async def test_hide_key_hides_and_shows_the_route_and_detail_gives_the_score_par
         assert f"score {first.score:.3f}" in text
         assert "score parts: " + " + ".join(f"{k} {v:.3f}" for k, v in first.score_parts.items() if v > 0) in text
         assert "why this place: " + why_place(first, None, second) in " ".join(text.split())
-        score_at = [c.key for c in COLUMNS].index("score")
+        score_at = app.screen.query_one(RankingTable).shown_keys.index("score")
         assert table_cells(app, first.result.route_id)[score_at] == f"{first.score:.3f}"
 
         screen.query_one("#ranking").focus()

@@ -139,6 +139,11 @@ class RankingTable(DataTable):
         self.descending = False
         self.selected: str | None = None
 
+    @property
+    def shown_keys(self) -> tuple[str, ...]:
+        """The keys of the columns on screen, in order (the narrowest screens drop some)."""
+        return getattr(self, "_layout_now", ((),))[0]
+
     def on_resize(self) -> None:
         if getattr(self, "_all", None) is not None:
             self.show(self._all)
