@@ -135,8 +135,8 @@ def plan(request: RouteRequest) -> Batch:
                          "minutes; use hydrochloric or acetic acid on chips", got=carbonate)
     w = as_sold if opt["strength"] is None else float(opt["strength"])
     if not (w_low <= w <= w_high):
-        raise InputError("option strength", f"{label} is planned from {w_low:.0%} to {w_high:.0%} w/w",
-                         got=f"{w:.1%}")
+        raise InputError("option strength", f"{label} is planned from {w_low:.0%} to {w_high:.0%} w/w; "
+                         f"'as sold' gives each acid its own ({label} {as_sold:.0%})", got=f"{w:.1%}")
     rx = parse_reaction(EQUATIONS[(acid, carbonate)])
     carb_sp = CARBONATES[carbonate][1]
     nu_acid, nu_co2 = -rx.coefficient(acid_sp), rx.coefficient("CO2(g)")

@@ -41,7 +41,7 @@ async def test_every_file_action_to_an_impossible_name_is_a_message(tmp_path):
             await pilot.press("ctrl+n")  # save as
             await _answer(pilot, name)
             assert app.is_running and app.planner.dirty
-            assert _status(app).startswith("not saved") and name[:20] in _status(app)
+            assert _status(app).startswith("not saved") and name[:20] in app.planner.last_failure
             assert app.planner.open_path(name) is False and app.is_running
             assert _status(app).startswith("not opened")
         assert app.planner.document["demand"] == "2 kg"

@@ -24,8 +24,8 @@ def test_sensitivity_text_echoes_typed_units_and_says_shared_warnings_once(capsy
     assert main(["sensitivity", "--route", "fermentation", "--route", "breath"]) == 0
     out = capsys.readouterr().out
     assert "150 g/L .. 250 g/L" in out and "kg/m3" not in out
-    saturated = [line for line in out.splitlines() if "inlet gas is saturated" in line]
-    assert len(saturated) == 1 and saturated[0].startswith("WARNING [fermentation, breath]")
+    shared = [line for line in out.splitlines() if "isotherm is used outside its fitted range" in line]
+    assert len(shared) == 1 and shared[0].startswith("WARNING [fermentation, breath]")
 
 
 def test_store_error_echoes_the_pressure_as_typed(capsys):

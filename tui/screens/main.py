@@ -77,6 +77,8 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         self.breakthrough: dict[str, Any] = {}
         self.routes = routes
         self.dirty = False
+        #: the last failed action in full (the status line may shorten it)
+        self.last_failure = ""
         self.generation = 0
         self.book: Any = None
         self._extras = False
@@ -251,6 +253,7 @@ class MainScreen(Filing, Working, WhatIf, Screen):
 
     def _fail(self, message: str) -> None:
         """A failed action: on the status line and, in full (wrapped), as a notification."""
+        self.last_failure = message
         self._say(message, True)
         self.notify(clean_text(message), title="failed", severity="error", timeout=15, markup=False)
 
