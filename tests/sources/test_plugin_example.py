@@ -2,7 +2,8 @@
 
 pip installs a copy of it (no dependencies, no build isolation: the test environment's
 setuptools builds it) into a scratch folder; the program then runs in a fresh process with that
-folder on its path, and the route must appear in ``routes``, ``compare`` and ``batch``.
+folder on its path, and the route must appear in ``routes``, ``compare`` and ``batch``. (That a price in the user's book wins over the route's
+default is tested in process, in tests/sources/test_route_prices.py.)
 """
 
 from __future__ import annotations
@@ -15,8 +16,6 @@ import sys
 from pathlib import Path
 
 import pytest
-
-from co2routes.tui.cli import main
 
 EXAMPLE = Path(__file__).resolve().parents[2] / "docs" / "examples" / "oven-soda"
 
@@ -73,15 +72,6 @@ def test_batch_prices_from_the_route_default(plugin_path):
     power = {c["item"]: c for c in answer["costs"]}["electricity for the oven"]
     assert power["price_from"] == "price book"
 
-
-def test_a_scenario_price_wins_over_the_route_default(plugin_path, tmp_path):
-    scenario = tmp_path / "s.toml"
-    assert main(["demo", str(scenario)]) == 0
-    scenario.write_text(scenario.read_text(encoding="utf-8").replace(
-        "[prices]", '[prices]\n"oven-soda-bulk" = "2.00 / kg"', 1), encoding="utf-8")
-    answer = co2routes(plugin_path, "batch", "oven-soda", str(scenario))
-    line = {c["item"]: c for c in answer["costs"]}["baking soda (bulk)"]
-    assert (line["price_from"], line["unit_price"]) == ("price book", 2.0)
 
 
 def test_example_doctests(plugin_path, monkeypatch):
