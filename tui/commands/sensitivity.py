@@ -42,8 +42,6 @@ def whatif_inputs(args: argparse.Namespace):
 def run(args: argparse.Namespace) -> dict:
     """The sensitivity as its JSON record."""
     from co2routes.sources.sensitivity import sensitivity, sensitivity_record
-    from co2routes.thermo.errors import InputError
-
     from co2routes.tui.commands.uncertainty import whole
 
     whole(args.top, "--top", 1, 10_000)
