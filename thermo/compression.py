@@ -209,6 +209,9 @@ def compress_stage(index: int, suction_pressure_pa: float, suction_temperature_k
     w_s = h2s - h1
     w = w_s / efficiency
     h2 = h1 + w
+    if h2 > props("H", "P", discharge_pressure_pa, "T", 1100.0, FLUID):  # the data's top, see above
+        raise InputError("efficiency", "is too low for this pressure ratio: the discharge would pass "
+                         "1100 K, beyond the property data (Span & Wagner 1996)", got=f"{efficiency:.0%}")
     t2 = props("T", "P", discharge_pressure_pa, "H", h2, FLUID)
     h2_state = props("H", "P", discharge_pressure_pa, "T", t2, FLUID)
     if cooled_temperature_k is None:

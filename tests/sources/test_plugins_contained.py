@@ -186,3 +186,18 @@ def test_options_must_be_options():
                                               "compute": lambda self, q: None})())
     assert registry.checked_route(LinearRoute("ok", "OK", "k", 1.0, 0.0, 1, 0.9)).options[0].key == "grade"
     assert isinstance(Option("a", "a", "count", "1"), Option)
+
+
+def test_the_interface_computation_leaves_broken_routes_out(tmp_path, monkeypatch):
+    # what the interface's ranking worker and its cost-against-batch chart call
+    import co2routes.sources.prices as prices
+    from co2routes.tui.compute import demand_sweep, outcome
+
+    monkeypatch.setattr(prices, "user_book_path", lambda: tmp_path / "none.toml")
+    good = LinearRoute("good", "Good", "sodium-bicarbonate", 1.9, 4.0, 2, 0.97)
+    broken = [Broken(f"zz-{name}", spoil) for name, spoil in RUNTIME.items()]
+    result = outcome({"demand": "1 kg"}, "s.toml", None, [good, *broken])
+    assert [row.result.route_id for row in result.comparison.rows] == ["good"]
+    assert len(result.comparison.failures) == len(RUNTIME)
+    sweep = demand_sweep(result.scenario, [good, *broken], known=result.comparison)
+    assert sweep is not None and set(sweep.cost_per_kg) == {"good"}

@@ -12,18 +12,9 @@ from textual.widgets import Input, Static
 from apphelp import settle, write_scenario
 from doubles import routes as doubles
 from co2routes.tui.app import Co2RoutesApp
-from co2routes.tui.screens.dialogs import PathDialog
+from test_app_files import _answer_path
 
 NAMES = ["~nosuchuser-co2/x.toml", "n" * 300 + ".toml"]
-
-
-async def _answer(pilot, text) -> None:
-    await pilot.pause()
-    assert isinstance(pilot.app.screen, PathDialog)
-    pilot.app.screen.query_one("#path-input", Input).value = str(text)
-    await pilot.press("enter")
-    for _ in range(5):
-        await pilot.pause()
 
 
 def _status(app) -> str:
@@ -39,14 +30,14 @@ async def test_every_file_action_to_an_impossible_name_is_a_message(tmp_path):
         for name in NAMES:
             name = name if name.startswith("~") else str(tmp_path / name)
             await pilot.press("ctrl+n")  # save as
-            await _answer(pilot, name)
+            await _answer_path(pilot, name)
             assert app.is_running and app.planner.dirty
             assert _status(app).startswith("not saved") and name[:20] in app.planner.last_failure
             assert app.planner.open_path(name) is False and app.is_running
             assert _status(app).startswith("not opened")
         assert app.planner.document["demand"] == "2 kg"
         app.planner._export_flow("ranking")
-        await _answer(pilot, "~nosuchuser-co2/ranking.md")
+        await _answer_path(pilot, "~nosuchuser-co2/ranking.md")
         await settle(pilot)
         assert app.is_running and _status(app).startswith("not exported")
         # a name with terminal escapes, read from a file, is shown without them
