@@ -7,8 +7,8 @@
 At equilibrium under a CO2 atmosphere, Henry's law with the temperature dependence of Sander
 (2015) (:func:`co2routes.thermo.henry.dissolved_co2_kg_m3`) gives the dissolved CO2 at the CO2
 partial pressure p_CO2 = P_abs - p_w(T) (water vapour of :func:`co2routes.thermo.water.vapor_pressure`).
-Against the carbonation table of Miller (1992), "Table I: Guideline for degrees of carbonation at
-various beer temperatures", BrewingTechniques 1(1), it is within 1 % at 38-46 degF and 3 % low at
+Against the carbonation table of Miller (1994), "Table I: Guideline for degrees of carbonation at
+various beer temperatures", BrewingTechniques 2(1), it is within 1 % at 38-46 degF and 3 % low at
 32 degF (see the tests). The constants are for water: beer (ethanol, extract) and sweet soft
 drinks hold a few per cent less.
 

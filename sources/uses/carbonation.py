@@ -52,7 +52,7 @@ INPUTS = (
 
 SOURCES = (
     "Sander (2015), Atmos. Chem. Phys. 15, 4399: Henry's law and its temperature dependence",
-    "Miller (1992), BrewingTechniques 1(1), Table I: carbonation at beer temperatures and pressures "
+    "Miller (1994), BrewingTechniques 2(1), Table I: carbonation at beer temperatures and pressures "
     "(the check of the model)",
     "Gay-Lussac: sugar to CO2 for priming",
 )

@@ -104,7 +104,7 @@ def test_purge_loss_is_the_washout_formula():
 
 
 @pytest.mark.parametrize("deg_f, psig, volumes", [
-    # Miller (1992), BrewingTechniques 1(1), "Table I: Guideline for degrees of carbonation at
+    # Miller (1994), BrewingTechniques 2(1), "Table I: Guideline for degrees of carbonation at
     # various beer temperatures": (32 degF, 10 psi) 2.70, (38 degF, 12 psi) 2.57, (46 degF, 15 psi)
     # 2.47 volumes. Henry's law of Sander (2015) within 4 % (it runs 3 % low at 32 degF).
     (32.0, 10.0, 2.70), (38.0, 12.0, 2.57), (46.0, 15.0, 2.47)])

@@ -106,6 +106,9 @@ class UsePanel(Vertical):
     def on_mount(self) -> None:
         self.form.fields.append(KIND_FIELD)
         self.sync(self._document, recompute=False)
+        outcome = getattr(self.screen, "outcome", None)
+        if outcome is not None:  # worked out before the panel was mounted
+            self.call_after_refresh(show_use, self.screen, outcome.scenario)
 
     def sync(self, document: Mapping[str, Any], recompute: bool = True) -> None:
         """Show the fields of the kind ``document`` names (none without one); after an edit, work
@@ -132,20 +135,23 @@ class UsePanel(Vertical):
 
 
 def add_use_panel(form: Any, document: Mapping[str, Any]) -> None:
-    """Mount the use panel at the end of the scenario form's fields so far."""
-    form.mount(UsePanel(form, document))
+    """Mount the use panel under the scenario form's fields, after the first frame (so that it
+    does not hold the first frame back)."""
+    form.call_after_refresh(lambda: form.mount(UsePanel(form, getattr(form.screen, "document", document))))
 
 
 def sync_use_fields(screen: Any) -> None:
     """After an edit: show the fields of the use the document now names."""
-    screen.query_one(UsePanel).sync(screen.document)
+    for panel in screen.query(UsePanel):
+        panel.sync(screen.document)
 
 
 def show_use(screen: Any, scenario: Any) -> None:
     """After a computation: the balance, the use's fields, and the demand field's hint saying
     where the demand came from."""
     use = getattr(scenario, "use", None)
-    screen.query_one(UsePanel).sync(screen.document, recompute=False)
-    screen.query_one(UseBalance).show(use)
+    for panel in screen.query(UsePanel):
+        panel.sync(screen.document, recompute=False)
+        panel.query_one(UseBalance).show(use)
     box = screen.query_one("#f-demand", Input)
     box.placeholder = "required" if use is None else f"{use.demand_kg_per_day:.4g} kg/day from the {use.kind} use"
