@@ -40,6 +40,7 @@ REACTION = "NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)"
 #: One or more runs of every command: arguments after ``co2routes`` (``--json`` added to each).
 CASES: dict[str, list[list[str]]] = {
     "compare": [[], ["scenario.toml"]],
+    "demand": [["greenhouse"], ["fermentation"], ["carbonation"], ["cold-box"]],
     "sensitivity": [[]],
     "uncertainty": [["--samples", "500", "--seed", "1"]],
     "batch": [["acid-carbonate"], ["fermentation", "scenario.toml"]],
