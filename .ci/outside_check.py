@@ -40,7 +40,11 @@ REACTION = "NaHCO3(s) + HCl(aq) -> NaCl(aq) + H2O(l) + CO2(g)"
 #: One or more runs of every command: arguments after ``co2routes`` (``--json`` added to each).
 CASES: dict[str, list[list[str]]] = {
     "compare": [[], ["scenario.toml"]],
-    "demand": [["greenhouse"], ["fermentation"], ["carbonation"], ["cold-box"]],
+    "demand": [["greenhouse", "--floor-area", "200 m**2", "--mean-height", "3 m"],
+               ["fermentation", "--volume", "20 L", "--original-gravity", "1.050", "--final-gravity", "1.010"],
+               ["carbonation", "--volume", "200 L"],
+               ["cold-box", "--box-area", "1 m**2", "--box-u", "0.5 W/m**2/K", "--hold-time", "24 h",
+                "--outside-temperature", "25 degC"]],
     "sensitivity": [[]],
     "uncertainty": [["--samples", "500", "--seed", "1"]],
     "batch": [["acid-carbonate"], ["fermentation", "scenario.toml"]],
