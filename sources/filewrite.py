@@ -130,13 +130,18 @@ def writable(path: Path | str) -> str | None:
 
     >>> writable("/nonexistent-folder-xyz/s.toml")
     'its folder /nonexistent-folder-xyz does not exist'
+    >>> writable("~nosuchuser-xyz/s.toml")
+    'the name cannot be used: Could not determine home directory.'
     """
-    path = Path(os.path.realpath(Path(path).expanduser()))
-    folder = path.parent
-    if not folder.is_dir():
-        return f"its folder {folder} does not exist"
-    if not os.access(folder, os.W_OK | os.X_OK):
-        return f"its folder {folder} cannot be written (permission denied)"
-    if path.is_dir():
-        return "is a folder"
+    try:
+        path = Path(os.path.realpath(Path(path).expanduser()))
+        folder = path.parent
+        if not folder.is_dir():
+            return f"its folder {folder} does not exist"
+        if not os.access(folder, os.W_OK | os.X_OK):
+            return f"its folder {folder} cannot be written (permission denied)"
+        if path.is_dir():
+            return "is a folder"
+    except (RuntimeError, OSError, ValueError) as err:  # ~nosuchuser, a name too long, a NUL byte
+        return f"the name cannot be used: {err}"
     return None

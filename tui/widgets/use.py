@@ -152,6 +152,7 @@ def show_use(screen: Any, scenario: Any) -> None:
     use = getattr(scenario, "use", None)
     for panel in screen.query(UsePanel):
         panel.sync(screen.document, recompute=False)
-        panel.query_one(UseBalance).show(use)
+        for balance in panel.query(UseBalance):  # none yet while the panel is still composing
+            balance.show(use)
     box = screen.query_one("#f-demand", Input)
     box.placeholder = "required" if use is None else f"{use.demand_kg_per_day:.4g} kg/day from the {use.kind} use"
