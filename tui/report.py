@@ -139,7 +139,6 @@ def comparison_table(comparison: Comparison) -> str:
     lines.append("dryer per route:")
     width = max((len(route["id"]) for route in record["routes"]), default=0)
     lines += [f"  {route['id']:<{width}}  {bed_words(route['dryer'])}" for route in record["routes"]]
-    lines.insert(1, f"every per-kg figure is per kg of {record['end_product'].replace('-', ' ')}")
     if record["end_product"] != "gas":
         lines.append("delivery per route (per-kg figures above are per kg of "
                      f"{record['end_product'].replace('-', ' ')}):")
