@@ -137,7 +137,10 @@ class UsePanel(Vertical):
 def add_use_panel(form: Any, document: Mapping[str, Any]) -> None:
     """Mount the use panel under the scenario form's fields, after the first frame (so that it
     does not hold the first frame back)."""
-    form.call_after_refresh(lambda: form.mount(UsePanel(form, getattr(form.screen, "document", document))))
+    def mount() -> None:
+        form.mount(UsePanel(form, getattr(form.screen, "document", document)))
+
+    form.call_after_refresh(mount)
 
 
 def sync_use_fields(screen: Any) -> None:
