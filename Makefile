@@ -21,7 +21,7 @@ run: $(VENV)/.installed
 	$(VENV)/bin/co2routes
 
 test: $(VENV)/.installed-test
-	$(VENV)/bin/pytest -n auto
+	$(VENV)/bin/pytest -n auto --dist worksteal
 
 bench: $(VENV)/.installed-test
 	$(PY) bench/run.py --write docs/benchmarks.md
