@@ -134,16 +134,17 @@ async def test_export_writes_what_compare_markdown_prints(tmp_path, capsys):
     capsys.readouterr()
     assert main(["compare", str(scenario), "--markdown"]) == 0
     printed = capsys.readouterr().out
-    for ending, flag in ((".md", "--markdown"), (".csv", "--csv"), (".json", "--json")):
-        app = Co2RoutesApp(str(scenario))
-        async with app.run_test(size=(120, 40)) as pilot:
-            await settle(pilot)
-            out = tmp_path / f"ranking{ending}"
+    endings = ((".md", "--markdown"), (".csv", "--csv"), (".json", "--json"))
+    app = Co2RoutesApp(str(scenario))
+    async with app.run_test(size=(120, 40)) as pilot:  # one session exports all three formats
+        await settle(pilot)
+        for ending, _ in endings:
             await pilot.press("ctrl+t")
-            await _answer_path(pilot, out)
+            await _answer_path(pilot, tmp_path / f"ranking{ending}")
+    for ending, flag in endings:
         capsys.readouterr()
         assert main(["compare", str(scenario), flag]) == 0  # outside the app, which holds stdout
-        assert out.read_text(encoding="utf-8") == capsys.readouterr().out
+        assert (tmp_path / f"ranking{ending}").read_text(encoding="utf-8") == capsys.readouterr().out
     assert (tmp_path / "ranking.md").read_text(encoding="utf-8") == printed
 
 
