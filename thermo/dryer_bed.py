@@ -10,6 +10,7 @@ from __future__ import annotations
 
 import math
 from dataclasses import dataclass
+from functools import lru_cache
 from typing import Any
 
 from co2routes.thermo import water_co2
@@ -53,6 +54,7 @@ class Bed:
         return math.pi * self.diameter_m**2 / 4.0
 
 
+@lru_cache(maxsize=256)  # pure in its (hashable) arguments; a recompute asks the same fronts again
 def front_shape(d: Desiccant, p_in: float, t_in: float, q_eq: float):
     """Constant-pattern shape for desiccant ``d`` fed water at ``p_in`` [Pa] (fresh-bed basis)."""
     if d.kind == "deliquescent":

@@ -35,6 +35,7 @@ of Natural Gases, 3rd ed., CO2 hydrate curve), which this model does not treat.
 from __future__ import annotations
 
 import math
+from functools import lru_cache
 from dataclasses import dataclass
 
 from co2routes.thermo.co2 import MOLAR_MASS as CO2_MOLAR_MASS
@@ -167,6 +168,7 @@ def _check(temperature_k: float, pressure_pa: float) -> tuple[float, float]:
     return t, p
 
 
+@lru_cache(maxsize=4096)  # pure in its float arguments; a recompute asks the same states again
 def saturated_water_in_co2(temperature_k: float, pressure_pa: float, *, vapour: bool = False) -> WaterInCO2:
     """Water [ppmv, g/kg] in CO2 saturated with water (or ice) at T and P, any CO2 phase.
 
@@ -219,6 +221,7 @@ def saturated_water_in_co2(temperature_k: float, pressure_pa: float, *, vapour: 
                       water_fugacity_coefficient=phi_w, over_ice=over_ice, co2_in_water_mole_fraction=x_co2)
 
 
+@lru_cache(maxsize=4096)
 def dew_point_in_co2(water_ppmv: float, pressure_pa: float, *, vapour: bool = True) -> float:
     """Dew (frost) point [K] of CO2 holding ``water_ppmv`` at total pressure P, Spycher et al. (2003).
 
