@@ -40,7 +40,7 @@ from dataclasses import dataclass
 
 from co2routes.thermo.co2 import MOLAR_MASS as CO2_MOLAR_MASS
 from co2routes.thermo.errors import InputError, require_positive
-from co2routes.thermo.water import WATER_MOLAR_MASS, WATER_TRIPLE_K, vapor_pressure
+from co2routes.thermo.water import WATER_TRIPLE_K, vapor_pressure
 
 #: Gas constant [bar cm3 / (mol K)].
 R_BAR_CM3 = 83.1447

@@ -190,7 +190,7 @@ def compute(request: RouteRequest) -> RouteResult:
         f"The batch gives off {-batch.heat_kj:.4g} kJ over {batch.days:.1f} days: about "
         f"{watts_per_l:.2g} W per litre of must: small per hour, so an open or thin-walled vessel "
         "loses most of it to the room; an insulated one warms and ferments faster.",
-        f"Time to finish: 7 days for 200 g/L at 20 degC, in proportion to the sugar, halving per 10 K "
+        "Time to finish: 7 days for 200 g/L at 20 degC, in proportion to the sugar, halving per 10 K "
         "warmer (Q10 = 2; common practice).",
     ]
     if sugar_note:

@@ -43,3 +43,17 @@ def write_scenario(path: Path, document) -> Path:
 
 
 COST_ONLY = {"cost": 1, "energy": 0, "time": 0, "heat": 0, "water": 0, "purity": 0, "hazard": 0}
+
+
+async def answer_path(pilot, path) -> None:
+    """Type ``path`` into the open path dialog and press Enter."""
+    from textual.widgets import Input
+
+    from co2routes.tui.screens.dialogs import PathDialog
+
+    await pilot.pause()
+    assert isinstance(pilot.app.screen, PathDialog)
+    pilot.app.screen.query_one("#path-input", Input).value = str(path)
+    await pilot.press("enter")
+    for _ in range(5):  # not settle(): the file worker may be waiting on the next dialog
+        await pilot.pause()

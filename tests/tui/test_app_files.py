@@ -9,21 +9,12 @@ import tomllib
 import pytest
 from textual.widgets import Input
 
-from apphelp import settle, write_scenario
+from apphelp import answer_path, settle, write_scenario
 from doubles import routes as doubles
 from co2routes.sources.scenario import read_document
 from co2routes.tui.app import Co2RoutesApp
 from co2routes.tui.cli import main
-from co2routes.tui.screens.dialogs import ConfirmDialog, PathDialog
-
-
-async def _answer_path(pilot, path) -> None:
-    await pilot.pause()
-    assert isinstance(pilot.app.screen, PathDialog)
-    pilot.app.screen.query_one("#path-input", Input).value = str(path)
-    await pilot.press("enter")
-    for _ in range(5):  # not settle(): the file worker may be waiting on the next dialog
-        await pilot.pause()
+from co2routes.tui.screens.dialogs import ConfirmDialog
 
 
 async def test_save_as_then_open_round_trips_exactly(tmp_path):
@@ -34,7 +25,7 @@ async def test_save_as_then_open_round_trips_exactly(tmp_path):
         await settle(pilot)
         document = app.planner.document
         await pilot.press("ctrl+n")
-        await _answer_path(pilot, tmp_path / "mine")  # .toml is added
+        await answer_path(pilot, tmp_path / "mine")  # .toml is added
         await settle(pilot)
         saved = tmp_path / "mine.toml"
         assert saved.exists() and not app.planner.dirty
@@ -45,7 +36,7 @@ async def test_save_as_then_open_round_trips_exactly(tmp_path):
         await settle(pilot)
         assert app.planner.document == {"name": "other", "demand": "1 kg"}
         await pilot.press("ctrl+o")
-        await _answer_path(pilot, saved)
+        await answer_path(pilot, saved)
         assert app.planner.document == document
         assert app.screen.query_one("#f-site--temperature", Input).value == "12 degC"
 
@@ -80,7 +71,7 @@ async def test_save_as_over_an_existing_file_asks(tmp_path):
     async with app.run_test(size=(120, 40)) as pilot:
         await settle(pilot)
         await pilot.press("ctrl+s")  # the demo has no file: save asks for a name
-        await _answer_path(pilot, existing)
+        await answer_path(pilot, existing)
         assert isinstance(app.screen, ConfirmDialog)
         await pilot.press("escape")
         await settle(pilot)
@@ -98,7 +89,7 @@ async def test_read_only_folder_is_a_message(tmp_path):
             await settle(pilot)
             document = app.planner.document
             await pilot.press("ctrl+n")
-            await _answer_path(pilot, folder / "x.toml")
+            await answer_path(pilot, folder / "x.toml")
             assert app.is_running and app.planner.document == document
             assert "not saved" in str(app.screen.query_one("#status").render())
             assert list(folder.iterdir()) == []
@@ -140,7 +131,7 @@ async def test_export_writes_what_compare_markdown_prints(tmp_path, capsys):
         await settle(pilot)
         for ending, _ in endings:
             await pilot.press("ctrl+t")
-            await _answer_path(pilot, tmp_path / f"ranking{ending}")
+            await answer_path(pilot, tmp_path / f"ranking{ending}")
     for ending, flag in endings:
         capsys.readouterr()
         assert main(["compare", str(scenario), flag]) == 0  # outside the app, which holds stdout
@@ -156,7 +147,7 @@ async def test_export_recipe_json_is_batch_json(tmp_path, capsys):
         await settle(pilot)
         route = app.planner.selected_row().result.route_id
         await pilot.press("ctrl+b")
-        await _answer_path(pilot, tmp_path / "batch.json")
+        await answer_path(pilot, tmp_path / "batch.json")
     capsys.readouterr()
     assert main(["batch", route, str(scenario), "--json"]) == 0
     assert (tmp_path / "batch.json").read_text(encoding="utf-8") == capsys.readouterr().out
@@ -170,11 +161,11 @@ async def test_unwritable_place_is_a_message(tmp_path):
         await settle(pilot)
         document = app.planner.document
         await pilot.press("ctrl+n")
-        await _answer_path(pilot, tmp_path / "no" / "such" / "x.toml")
+        await answer_path(pilot, tmp_path / "no" / "such" / "x.toml")
         await settle(pilot)
         assert app.is_running and app.planner.document == document and app.planner.dirty is False
         assert "not saved" in str(app.screen.query_one("#status").render())
         await pilot.press("ctrl+t")
-        await _answer_path(pilot, tmp_path / "no" / "x.md")
+        await answer_path(pilot, tmp_path / "no" / "x.md")
         await settle(pilot)
         assert "not exported" in str(app.screen.query_one("#status").render())

@@ -9,10 +9,9 @@ import tomllib
 import pytest
 from textual.widgets import Input, Static
 
-from apphelp import settle, write_scenario
+from apphelp import answer_path, settle, write_scenario
 from doubles import routes as doubles
 from co2routes.tui.app import Co2RoutesApp
-from test_app_files import _answer_path
 
 NAMES = ["~nosuchuser-co2/x.toml", "n" * 300 + ".toml"]
 
@@ -30,14 +29,14 @@ async def test_every_file_action_to_an_impossible_name_is_a_message(tmp_path):
         for name in NAMES:
             name = name if name.startswith("~") else str(tmp_path / name)
             await pilot.press("ctrl+n")  # save as
-            await _answer_path(pilot, name)
+            await answer_path(pilot, name)
             assert app.is_running and app.planner.dirty
             assert _status(app).startswith("not saved") and name[:20] in app.planner.last_failure
             assert app.planner.open_path(name) is False and app.is_running
             assert _status(app).startswith("not opened")
         assert app.planner.document["demand"] == "2 kg"
         app.planner._export_flow("ranking")
-        await _answer_path(pilot, "~nosuchuser-co2/ranking.md")
+        await answer_path(pilot, "~nosuchuser-co2/ranking.md")
         await settle(pilot)
         assert app.is_running and _status(app).startswith("not exported")
         # a name with terminal escapes, read from a file, is shown without them
