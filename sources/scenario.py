@@ -214,6 +214,8 @@ def _demand(p: _Parts) -> dict[str, Any]:
             raise InputError(field, "must be a mass per batch such as '3 kg' or a rate "
                              "such as '1.5 kg/day'", got=repr(demand_text)) from None
         batch_s = p.q(None, "batch", "time", "1 day", positive=True)
+        if use is not None and "batch" not in p.document:
+            batch_s = use.period_s  # a use's own run (a brew, a box's hold) is the batch
         co2_kg = rate * batch_s
     low, high = limits.DEMAND_KG
     limits.check_between(co2_kg, field, low, high, f"between {low * 1000:g} g and {high / 1000:g} t of CO2 per "

@@ -24,7 +24,7 @@ def plant_words(route: Mapping[str, Any]) -> str:
         duty = "" if s["duty_h_per_day"] is None else f", each busy {s['duty_h_per_day']:.1f} h/day"
         mode = "" if s["mode"] == "one unit" else f" {s['mode']}"
         parts.append(f"{s['units_in_parallel']} unit{'s' if s['units_in_parallel'] > 1 else ''}{mode}{duty}")
-        if s["buffer_volume_m3"]:
+        if s["buffer_volume_m3"] and s["buffer_volume_m3"] > 1e-9:  # none needed: rounding, not a bag
             parts.append(f"buffer {s['buffer_kind']} {s['buffer_volume_m3']:.3g} m3")
         if not s["meets_demand"]:
             parts.append("CANNOT KEEP UP")

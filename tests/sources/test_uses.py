@@ -82,7 +82,9 @@ every = "14 day"
 '''
     s = validate(tomllib.loads(text), "t.toml", text)
     assert s.use.kind == "fermentation"
-    assert s.co2_kg == pytest.approx(s.use.demand_kg_per_day, rel=1e-12)  # batch 1 day by default
+    # the batch is the use's own run (a brew every period), so the CO2 per batch is one brew's
+    assert s.co2_kg == pytest.approx(s.use.demand_kg, rel=1e-12)
+    assert s.batch_s == pytest.approx(s.use.period_s, rel=1e-12)
     assert "fermentation" in s.use.source_text
 
 
