@@ -11,7 +11,8 @@ do not suffice, the route says so and counts the hours it would take.
 from __future__ import annotations
 
 from co2routes.sources.base import Byproduct, Option, RouteRequest, RouteResult
-from co2routes.sources.routes.shared import R, kwh, percent, saturated
+from co2routes.sources.routes.shared import kwh, percent, saturated
+from co2routes.thermo.constants import R
 from co2routes.sources.routes.sorbent_calcination import (BED_OPTIONS, M_H2O, RELEASE_OPTIONS, kiln_result,
                                                 load_bed, release)
 from co2routes.thermo import cautions

@@ -4,7 +4,6 @@ from __future__ import annotations
 
 from typing import Mapping
 
-from co2routes.thermo.constants import R  # noqa: F401 - the routes take R from here
 from co2routes.thermo.gasmix import normalise
 
 #: Joules in a kilowatt-hour.

@@ -14,7 +14,8 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Site, Use
-from co2routes.sources.routes.shared import R, kwh, percent, saturated
+from co2routes.sources.routes.shared import kwh, percent, saturated
+from co2routes.thermo.constants import R
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
 from co2routes.thermo.constants import WATER_MOLAR_MASS as M_H2O

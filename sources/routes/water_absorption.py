@@ -12,7 +12,8 @@ from __future__ import annotations
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, RouteRequest, RouteResult, Use
 from co2routes.sources.common import temperature_change
-from co2routes.sources.routes.shared import YES_NO, R, kwh, percent, saturated
+from co2routes.sources.routes.shared import YES_NO, kwh, percent, saturated
+from co2routes.thermo.constants import R
 from co2routes.thermo import cautions
 from co2routes.thermo.co2 import MOLAR_MASS as M_CO2
 from co2routes.thermo.errors import InputError
