@@ -63,7 +63,7 @@ def inlet_ppmv(inp: Any) -> float:
 
     >>> from co2routes.thermo.dryer import DryerInput
     >>> round(inlet_ppmv(DryerInput(1e-5, 298.15, inlet_relative_humidity=0.5)), -1)
-    15780.0
+    15800.0
     """
     t, p = inp.inlet_temperature_k, inp.inlet_pressure_pa
     y_sat = water_co2.saturated_water_in_co2(t, p).water_ppmv

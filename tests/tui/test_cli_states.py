@@ -167,10 +167,10 @@ def test_moisture_saturated_bubbler(capsys):
 
 
 def test_moisture_at_pressure_carries_pressure_caution(capsys):
-    # IAPWS-95 ideal mixing 3169.9 ppmv at 10 bar, raised by the non-ideality of compressed CO2
-    # (Spycher et al. 2003: a few per cent at 10 bar); between 1 and 1.1 times ideal.
+    # IAPWS-95 ideal mixing 3169.9 ppmv at 10 bar, raised by the non-ideality of compressed CO2:
+    # Meyer & Harvey (2015) measure 1.10 times ideal at 10 bar (21.7 and 30 degC); 1.05 to 1.15.
     answer = run_json(capsys, "moisture", "--temperature", "25 degC", "--pressure", "10 bar")
-    assert 1.0 < answer["water_ppmv"] / (1e6 * 3169.9 / 1e6) < 1.1
+    assert 1.05 < answer["water_ppmv"] / (1e6 * 3169.9 / 1e6) < 1.15
     assert cautions.PRESSURE in answer["cautions"]
 
 
