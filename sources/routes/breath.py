@@ -11,6 +11,7 @@ do not suffice, the route says so and counts the hours it would take.
 from __future__ import annotations
 
 from co2routes.sources.base import Byproduct, Option, RouteRequest, RouteResult
+from co2routes.sources.model import RouteModel
 from co2routes.sources.routes.shared import kwh, percent, saturated
 from co2routes.thermo.constants import R
 from co2routes.sources.routes.sorbent_calcination import (BED_OPTIONS, M_H2O, RELEASE_OPTIONS, kiln_result,
@@ -93,57 +94,53 @@ def exhaled_air(rq: float, air: dict[str, float], pressure_pa: float) -> dict[st
     return saturated(dry, EXHALED_K, pressure_pa)
 
 
-class BreathRoute:
-    """Exhaled breath drawn through a lime bed; the bed calcined as in the sorbent route."""
+def compute(request: RouteRequest) -> RouteResult:
+    """Exhaled breath drawn through a lime bed; the bed calcined as in the sorbent route.
 
-    id = "breath"
-    label = "Captured breath (lime bed, calcined)"
-    options = OPTIONS
+    Plan one batch delivering ``request.co2_kg`` of CO2.
+    """
+    from co2routes.thermo.flue import air_fractions
+    from co2routes.thermo.water import vapor_pressure
 
-    def compute(self, request: RouteRequest) -> RouteResult:
-        """Plan one batch delivering ``request.co2_kg`` of CO2."""
-        from co2routes.thermo.flue import air_fractions
-        from co2routes.thermo.water import vapor_pressure
-
-        opt, site = request.options, request.site
-        co2_mol = request.co2_kg / M_CO2
-        capture = float(opt["capture_fraction"])
-        exhaled_mol = co2_mol / capture
-        _, per_person = co2_generation_rate(float(opt["rq"]), float(opt["bmr"]) * DAY_S / 1e6, float(opt["met"]))
-        people = int(opt["people"])
-        needed_s = exhaled_mol / (people * per_person)
-        given_s = float(opt["hours"])
-        warnings = []
-        if needed_s > given_s:
-            made = people * per_person * given_s * capture * M_CO2
-            warnings.append(f"{people} people over {given_s / 3600:.3g} h give only {made:.3g} kg of CO2 into the "
-                            f"bed; the batch needs {needed_s / 3600:.3g} h of breathing (or more people).")
-        breath = exhaled_air(float(opt["rq"]), air_fractions(site.air_co2_fraction), site.pressure_pa)
-        rel = release(co2_mol, site, opt)
-        bed = load_bed(co2_mol, breath["CO2"], capture, rel.bed_ca_mol, str(opt["sorbent"]),
-                       site.temperature_k, site.pressure_pa, opt)
-        # water breathed out per mol of exhaled gas, and what condenses when it cools to the site
-        gas_mol = exhaled_mol / breath["CO2"]
-        water_out = gas_mol * breath["H2O"]
-        p_s = vapor_pressure(site.temperature_k)
-        line_condensate = max(0.0, water_out - gas_mol * (1 - breath["H2O"]) * p_s / (site.pressure_pa - p_s)) * M_H2O
-        warnings.append(f"Exhaled air is saturated at {EXHALED_K - 273.15:.0f} degC: it carries "
-                        f"{water_out * M_H2O / request.co2_kg:.2f} kg of water per kg CO2, of which "
-                        f"{line_condensate / request.co2_kg:.2f} kg condenses in the collector line: drain it.")
-        warnings.extend(rel.warnings)
-        fan_kwh = kwh(bed.fan_j)
-        rate_kg_day = per_person * M_CO2 * DAY_S
-        notes = (
-            f"Each person breathes out {rate_kg_day:.2f} kg CO2 per day at {float(opt['met']):.2g} MET "
-            f"(Persily & de Jonge 2017); exhaled air {percent(breath['CO2'])} CO2, {percent(breath['H2O'])} water.",
-            f"Gas through the bed {bed.gas_m3 / request.co2_kg:.1f} m3 per kg CO2, pressure drop "
-            f"{bed.pressure_drop_pa:.0f} Pa, fan {fan_kwh / request.co2_kg:.4f} kWh per kg CO2.",
-        )
-        condensate = Byproduct("breath condensate", "H2O", line_condensate, "drained from the collector line")
-        return kiln_result(request, rel, bed, max(needed_s, 0.0), co2_generated_kg=exhaled_mol * M_CO2,
-                           byproducts=(condensate,), first_cautions=(cautions.BREATH,),
-                           hazard_reason="kiln near 900 degC and caustic lime; CO2 builds up where people gather",
-                           warnings=warnings, notes=notes)
+    opt, site = request.options, request.site
+    co2_mol = request.co2_kg / M_CO2
+    capture = float(opt["capture_fraction"])
+    exhaled_mol = co2_mol / capture
+    _, per_person = co2_generation_rate(float(opt["rq"]), float(opt["bmr"]) * DAY_S / 1e6, float(opt["met"]))
+    people = int(opt["people"])
+    needed_s = exhaled_mol / (people * per_person)
+    given_s = float(opt["hours"])
+    warnings = []
+    if needed_s > given_s:
+        made = people * per_person * given_s * capture * M_CO2
+        warnings.append(f"{people} people over {given_s / 3600:.3g} h give only {made:.3g} kg of CO2 into the "
+                        f"bed; the batch needs {needed_s / 3600:.3g} h of breathing (or more people).")
+    breath = exhaled_air(float(opt["rq"]), air_fractions(site.air_co2_fraction), site.pressure_pa)
+    rel = release(co2_mol, site, opt)
+    bed = load_bed(co2_mol, breath["CO2"], capture, rel.bed_ca_mol, str(opt["sorbent"]),
+                   site.temperature_k, site.pressure_pa, opt)
+    # water breathed out per mol of exhaled gas, and what condenses when it cools to the site
+    gas_mol = exhaled_mol / breath["CO2"]
+    water_out = gas_mol * breath["H2O"]
+    p_s = vapor_pressure(site.temperature_k)
+    line_condensate = max(0.0, water_out - gas_mol * (1 - breath["H2O"]) * p_s / (site.pressure_pa - p_s)) * M_H2O
+    warnings.append(f"Exhaled air is saturated at {EXHALED_K - 273.15:.0f} degC: it carries "
+                    f"{water_out * M_H2O / request.co2_kg:.2f} kg of water per kg CO2, of which "
+                    f"{line_condensate / request.co2_kg:.2f} kg condenses in the collector line: drain it.")
+    warnings.extend(rel.warnings)
+    fan_kwh = kwh(bed.fan_j)
+    rate_kg_day = per_person * M_CO2 * DAY_S
+    notes = (
+        f"Each person breathes out {rate_kg_day:.2f} kg CO2 per day at {float(opt['met']):.2g} MET "
+        f"(Persily & de Jonge 2017); exhaled air {percent(breath['CO2'])} CO2, {percent(breath['H2O'])} water.",
+        f"Gas through the bed {bed.gas_m3 / request.co2_kg:.1f} m3 per kg CO2, pressure drop "
+        f"{bed.pressure_drop_pa:.0f} Pa, fan {fan_kwh / request.co2_kg:.4f} kWh per kg CO2.",
+    )
+    condensate = Byproduct("breath condensate", "H2O", line_condensate, "drained from the collector line")
+    return kiln_result(request, rel, bed, max(needed_s, 0.0), co2_generated_kg=exhaled_mol * M_CO2,
+                       byproducts=(condensate,), first_cautions=(cautions.BREATH,),
+                       hazard_reason="kiln near 900 degC and caustic lime; CO2 builds up where people gather",
+                       warnings=warnings, notes=notes)
 
 
-ROUTE = BreathRoute()
+ROUTE = RouteModel("breath", "Captured breath (lime bed, calcined)", OPTIONS, compute)

@@ -14,6 +14,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from co2routes.sources.base import Byproduct, Energy, Option, RawGas, Reagent, RouteRequest, RouteResult, Site, Use
+from co2routes.sources.model import RouteModel
 from co2routes.sources.routes.shared import kwh, percent, saturated
 from co2routes.thermo.constants import R
 from co2routes.thermo import cautions
@@ -239,36 +240,32 @@ def kiln_result(request: RouteRequest, rel: Release, bed, load_s: float, *, co2_
     )
 
 
-class SorbentCalcinationRoute:
-    """Lime loaded from air in a fan-blown bed, calcined in a kiln, slaked and reused."""
+def compute(request: RouteRequest) -> RouteResult:
+    """Lime loaded from air in a fan-blown bed, calcined in a kiln, slaked and reused.
 
-    id = "sorbent-calcination"
-    label = "Lime sorbent from air, calcined"
-    options = OPTIONS
-
-    def compute(self, request: RouteRequest) -> RouteResult:
-        """Plan one batch delivering ``request.co2_kg`` of CO2."""
-        opt, site = request.options, request.site
-        co2_mol = request.co2_kg / M_CO2
-        rel = release(co2_mol, site, opt)
-        bed = load_bed(co2_mol, site.air_co2_fraction, float(opt["capture_fraction"]), rel.bed_ca_mol,
-                       str(opt["sorbent"]), site.temperature_k, site.pressure_pa, opt)
-        fan_kwh = kwh(bed.fan_j)
-        uptake_s = float(opt["uptake_time"])
-        load_s = max(bed.supply_s, uptake_s)
-        warnings = list(rel.warnings)
-        if bed.supply_s > uptake_s:
-            warnings.append(f"The fan needs {bed.supply_s / 86400:.1f} days to pass enough air through the bed, "
-                            "longer than the sorbent's uptake time: a wider bed or faster air shortens it.")
-        notes = (
-            f"Air through the bed: {bed.gas_m3 / request.co2_kg:.0f} m3 per kg CO2 at "
-            f"{site.air_co2_fraction * 1e6:.0f} ppm, {percent(float(opt['capture_fraction']))} taken up; bed "
-            f"{bed.bed_kg:.1f} kg over {bed.bed_area_m2:.2f} m2, pressure drop {bed.pressure_drop_pa:.0f} Pa, "
-            f"fan {fan_kwh / request.co2_kg:.3f} kWh per kg CO2.",
-        )
-        return kiln_result(request, rel, bed, load_s, co2_generated_kg=request.co2_kg, byproducts=(),
-                           hazard_reason="kiln near 900 degC and caustic lime dust", first_cautions=(),
-                           warnings=warnings, notes=notes)
+    Plan one batch delivering ``request.co2_kg`` of CO2.
+    """
+    opt, site = request.options, request.site
+    co2_mol = request.co2_kg / M_CO2
+    rel = release(co2_mol, site, opt)
+    bed = load_bed(co2_mol, site.air_co2_fraction, float(opt["capture_fraction"]), rel.bed_ca_mol,
+                   str(opt["sorbent"]), site.temperature_k, site.pressure_pa, opt)
+    fan_kwh = kwh(bed.fan_j)
+    uptake_s = float(opt["uptake_time"])
+    load_s = max(bed.supply_s, uptake_s)
+    warnings = list(rel.warnings)
+    if bed.supply_s > uptake_s:
+        warnings.append(f"The fan needs {bed.supply_s / 86400:.1f} days to pass enough air through the bed, "
+                        "longer than the sorbent's uptake time: a wider bed or faster air shortens it.")
+    notes = (
+        f"Air through the bed: {bed.gas_m3 / request.co2_kg:.0f} m3 per kg CO2 at "
+        f"{site.air_co2_fraction * 1e6:.0f} ppm, {percent(float(opt['capture_fraction']))} taken up; bed "
+        f"{bed.bed_kg:.1f} kg over {bed.bed_area_m2:.2f} m2, pressure drop {bed.pressure_drop_pa:.0f} Pa, "
+        f"fan {fan_kwh / request.co2_kg:.3f} kWh per kg CO2.",
+    )
+    return kiln_result(request, rel, bed, load_s, co2_generated_kg=request.co2_kg, byproducts=(),
+                       hazard_reason="kiln near 900 degC and caustic lime dust", first_cautions=(),
+                       warnings=warnings, notes=notes)
 
 
-ROUTE = SorbentCalcinationRoute()
+ROUTE = RouteModel("sorbent-calcination", "Lime sorbent from air, calcined", OPTIONS, compute)
