@@ -15,7 +15,9 @@ A scenario may carry two tables (validated by :func:`scenario_choices`, called f
     exclude = ["breath"]                     # leave these out
 
 A route that breaks a limit is still listed, after the others, with the limits it breaks
-(:func:`limit_breaks`); a route left out is listed as hidden. The capital limit reads
+(:func:`limit_breaks`); so is a route whose plant cannot keep up with the demand at all
+(:func:`demand_break`, a limit no scenario can lift). A route left out is listed as hidden. The
+capital limit reads
 ``capital_per_kg`` off a planned route when the route carries it; until then every route's capital
 is unknown and, unknown counting as worst, breaks a capital limit (said so in its reason).
 """
@@ -170,6 +172,23 @@ def limit_breaks(result: Any, limits: Mapping[str, float], currency: str = "") -
             side = "below" if key.startswith("min_") else "above"
             out.append(f"{name} {fmt.format(value)}{unit} {side} the limit {shown_limit}")
     return tuple(out)
+
+
+def demand_break(result: Any) -> tuple[str, ...]:
+    """The demand itself as a limit every plan keeps: a route whose schedule cannot keep up
+    (``schedule.meets_demand`` false, e.g. too few people breathing into a lime bed) breaks it
+    and is listed after the routes that can, with what it would take.
+
+    >>> from types import SimpleNamespace as S
+    >>> demand_break(S(schedule=S(meets_demand=False, note="it would take 5 people")))
+    ('demand not met (it would take 5 people)',)
+    >>> demand_break(S(schedule=None)), demand_break(S(schedule=S(meets_demand=True, note="")))
+    ((), ())
+    """
+    schedule = getattr(result, "schedule", None)
+    if schedule is None or schedule.meets_demand:
+        return ()
+    return (f"demand not met ({schedule.note})",)
 
 
 def toggled(table: Mapping[str, Any] | None, route_id: str, hidden: bool) -> dict[str, Any] | None:

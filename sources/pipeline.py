@@ -14,7 +14,7 @@ from dataclasses import dataclass, field
 from typing import Any, Mapping, Sequence
 
 from co2routes.sources.base import Energy, Route, RouteRequest, RouteResult, Use
-from co2routes.sources.choice import check_route_ids, hidden_ids, limit_breaks
+from co2routes.sources.choice import check_route_ids, demand_break, hidden_ids, limit_breaks
 from co2routes.sources.guard import (check_total, failure_line, named_in, option_table_field, route_options,
                                       run_route)
 from co2routes.sources.plan import NotApplicable, PlannedRoute
@@ -141,7 +141,8 @@ def compare(scenario: Scenario, routes: Sequence[Route] | None = None) -> Compar
         except Exception as err:  # noqa: BLE001 - a broken route is reported, not fatal
             failures.append(failure_line(route, err))
     reference = reference_cost(scenario.prices, scenario.end_product)
-    breaks = {r.route_id: limit_breaks(r, scenario.limits, scenario.prices.currency) for r in results}
+    breaks = {r.route_id: demand_break(r) + limit_breaks(r, scenario.limits, scenario.prices.currency)
+              for r in results}
     rows = rank(results, scenario.weights, reference_cost=reference, breaks=breaks,
                 hidden=hidden_ids(scenario, (r.route_id for r in results)))
     return Comparison(scenario.name, scenario.end_product, scenario.prices.currency,
