@@ -299,13 +299,36 @@ def dew_point_in_co2(water_ppmv: float, pressure_pa: float, *, vapour: bool = Tr
     p = require_positive("pressure", pressure_pa)
     from co2routes.thermo.water import WATER_TRIPLE_PA, dew_point as boiling_point
 
+    hi = MAX_TEMPERATURE_K if p <= WATER_TRIPLE_PA else min(MAX_TEMPERATURE_K, boiling_point(min(p, 22e6)) - 1e-6)
     t_d = _dew_point_fixed_point(y, p, vapour)
+    t_cond = _co2_condensation_k(p)
+    if t_cond is not None and (t_d is None or t_d < t_cond) and _sat_ppmv_or_zero(t_cond + 1e-3, p, vapour) <= y:
+        # water condenses from the gas before the CO2 does: the dew point is the gas-side root
+        # (below the CO2's condensation the water it can hold jumps, and a second root lies there)
+        return _bisect_dew_point(y, p, vapour, t_cond + 1e-3, hi)
     if t_d is not None:
         return t_d
-    lo = 160.0
-    hi = MAX_TEMPERATURE_K if p <= WATER_TRIPLE_PA else min(MAX_TEMPERATURE_K, boiling_point(min(p, 22e6)) - 1e-6)
     if saturated_water_in_co2(hi, p).water_ppmv < y:
         raise InputError("water content", "is more than CO2 holds at 100 degC at this pressure", got=y)
+    t_d = _bisect_dew_point(y, p, vapour, 160.0, hi)
+    if abs(_sat_ppmv_or_zero(t_d, p, vapour) / y - 1.0) > 1e-3:
+        # CO2 is solid at (T_d, P): no fluid CO2 to hold the water; ideal mixing (no enhancement)
+        return boiling_point(y * 1e-6 * p)
+    return t_d
+
+
+def _co2_condensation_k(p: float) -> float | None:
+    """CO2's own saturation temperature at P [K] (Span & Wagner 1996), None outside its
+    triple-point to critical pressure (no liquid CO2 to condense)."""
+    from co2routes.thermo import co2
+
+    if not co2.TRIPLE_PRESSURE_PA < p < co2.CRITICAL_PRESSURE_PA:
+        return None
+    return co2.saturation_at_pressure(p).temperature_k
+
+
+def _bisect_dew_point(y: float, p: float, vapour: bool, lo: float, hi: float) -> float:
+    """T in [lo, hi] where the saturated water content crosses ``y`` (rising with T), to 1 uK."""
     for _ in range(60):
         mid = 0.5 * (lo + hi)
         if _sat_ppmv_or_zero(mid, p, vapour) < y:
@@ -314,11 +337,7 @@ def dew_point_in_co2(water_ppmv: float, pressure_pa: float, *, vapour: bool = Tr
             hi = mid
         if hi - lo < 1e-6:
             break
-    t_d = 0.5 * (lo + hi)
-    if abs(_sat_ppmv_or_zero(t_d, p, vapour) / y - 1.0) > 1e-3:
-        # CO2 is solid at (T_d, P): no fluid CO2 to hold the water; ideal mixing (no enhancement)
-        return boiling_point(y * 1e-6 * p)
-    return t_d
+    return 0.5 * (lo + hi)
 
 
 def _dew_point_fixed_point(y: float, p: float, vapour: bool) -> float | None:

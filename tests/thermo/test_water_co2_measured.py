@@ -127,3 +127,13 @@ def test_excluded_valtz_points_fall_below_the_ideal_mixing_bound():
              if float(r["water_mole_fraction"]) * 1e6
              < water.saturated_ppmv(float(r["temperature_k"]), float(r["pressure_bar"]) * 1e5)]
     assert len(below) >= 2
+
+
+def test_dew_point_of_measured_gas_is_its_saturation_temperature():
+    # Meyer & Harvey (2015) Table 2: CO2 saturated at 21.7 degC and 50 bar holds 1024 ppm; its
+    # dew point at 50 bar is that temperature (0.5 K), found on the gas side although below the
+    # CO2's own condensation point (14.3 degC at 50 bar) a second root exists in liquid CO2.
+    row = next(r for r in _rows("fit", "meyer_harvey_2015")
+               if r["temperature_k"] == "294.83" and r["pressure_bar"] == "50")
+    ppmv = float(row["water_mole_fraction"]) * 1e6
+    assert water_co2.dew_point_in_co2(ppmv, 50e5) == pytest.approx(294.83, abs=0.5)
