@@ -27,14 +27,19 @@ SETTLE_S = 0.15
 class Working:
     """The compute and chart workers and the progress bar; the screen shows their answers."""
 
-    @work(exclusive=True, thread=True, group="compute")
     def recompute(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
+        """Start the progress bar's timer here, on the UI thread, and the ranking worker: the worker
+        need not wait for the first frame to be drawn before it starts."""
+        self._busy(generation)
+        self._rank(document, generation, edited_field)
+
+    @work(exclusive=True, thread=True, group="compute")
+    def _rank(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
         """Validate and rank (thread worker); hands the answer to the UI thread."""
         from co2routes.thermo.errors import InputError
         from co2routes.tui.compute import outcome
 
         worker = get_current_worker()
-        self.app.call_from_thread(self._busy, generation)
         text = self.opened.text if document == self.opened.document else None
 
         def proceed() -> bool:
@@ -58,15 +63,15 @@ class Working:
             if not worker.is_cancelled:
                 self.app.call_from_thread(self._computed, generation, result)
         finally:
-            # after the first answer (good or refused) is on screen
-            self._extras_once()
+            if not self._extras:
+                # once the first answer (good or refused) has been drawn
+                self._extras = True
+                self.app.call_from_thread(self.call_after_refresh, self._extras_once)
 
+    @work(thread=True, group="extras")
     def _extras_once(self) -> None:
         """Add the route-option and price fields to the form, once, after the first ranking is on
-        screen (mounting them takes longer than the ranking itself)."""
-        if self._extras:
-            return
-        self._extras = True
+        screen (mounting them takes longer than the ranking itself; thread worker)."""
         try:
             self._load_extras()
         except Exception as err:  # noqa: BLE001 - a broken price book or route must not stop the form
@@ -81,8 +86,13 @@ class Working:
         fields = option_fields(routes) + price_fields(self.book)
         self.app.call_from_thread(self.query_one(ScenarioForm).add_fields, fields, self.document)
 
-    @work(exclusive=True, thread=True, group="charts")
     def redraw_charts(self, outcome: Any, generation: int) -> None:
+        """Start the chart worker once the ranking is drawn (running beside the frame, it would
+        slow the frame down)."""
+        self.call_after_refresh(self._draw_charts, outcome, generation)
+
+    @work(exclusive=True, thread=True, group="charts")
+    def _draw_charts(self, outcome: Any, generation: int) -> None:
         """Work out the cost-against-batch sweep and the saturation line (thread worker)."""
         from co2routes.tui.compute import breakthrough_points, demand_sweep, saturation_curve
 
