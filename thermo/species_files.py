@@ -20,6 +20,7 @@ from __future__ import annotations
 import os
 import re
 from dataclasses import dataclass
+from functools import lru_cache
 from typing import Mapping
 
 from co2routes.thermo._lazy import cantera
@@ -62,8 +63,9 @@ def locate(name: str) -> str:
     raise FileNotFoundError(f"species file {name} is not in Cantera's data directories")
 
 
+@lru_cache(maxsize=None)
 def read(name: str) -> SpeciesFile:
-    """Scan the species file ``name`` (a path, or a file in Cantera's data directories)."""
+    """Scan the species file ``name`` (a path, or a file in Cantera's data directories); once."""
     path = locate(name)
     with open(path, encoding="utf-8") as handle:
         text = handle.read()
