@@ -27,19 +27,14 @@ SETTLE_S = 0.15
 class Working:
     """The compute and chart workers and the progress bar; the screen shows their answers."""
 
-    def recompute(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
-        """Start the progress bar's timer here, on the UI thread, and the ranking worker: the worker
-        need not wait for the first frame to be drawn before it starts."""
-        self._busy(generation)
-        self._rank(document, generation, edited_field)
-
     @work(exclusive=True, thread=True, group="compute")
-    def _rank(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
+    def recompute(self, document: dict[str, Any], generation: int, edited_field: Field | None) -> None:
         """Validate and rank (thread worker); hands the answer to the UI thread."""
         from co2routes.thermo.errors import InputError
         from co2routes.tui.compute import outcome
 
         worker = get_current_worker()
+        self.app.call_from_thread(self._busy, generation)
         text = self.opened.text if document == self.opened.document else None
 
         def proceed() -> bool:
