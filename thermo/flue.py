@@ -25,7 +25,7 @@ from dataclasses import dataclass
 from functools import lru_cache
 from typing import Mapping
 
-from co2routes.thermo import species, water
+from co2routes.thermo import species, species_files, water
 from co2routes.thermo._lazy import cantera
 from co2routes.thermo.errors import InputError, require_positive
 
@@ -163,20 +163,16 @@ def _gas(fuel_species: str):
     if fuel_species not in cache:
         ct = cantera()
         wanted = set(PRODUCTS) | {fuel_species}
-        sp = [s for s in _species_list() if s.name in wanted]
+        gas_file = species_files.read("nasa_gas.yaml")
+        sp = [gas_file.species(name) for name in gas_file.names if name in wanted]
         cache[fuel_species] = ct.Solution(thermo="ideal-gas", species=sp)
     return cache[fuel_species]
 
 
-@lru_cache(maxsize=1)
-def _species_list() -> tuple:
-    """Species of ``nasa_gas.yaml`` (read once; Species objects are not changed here)."""
-    return tuple(cantera().Species.list_from_file("nasa_gas.yaml"))
-
-
 @lru_cache(maxsize=8)
 def _fuel_species(fuel_species: str):
-    return next(s for s in _species_list() if s.name == fuel_species)
+    """The fuel's species of ``nasa_gas.yaml`` (read once; not changed here)."""
+    return species_files.read("nasa_gas.yaml").species(fuel_species)
 
 
 def _fuel(fuel: str):

@@ -5,7 +5,8 @@ gases come from Cantera's bundled ``nasa_gas.yaml`` (McBride, Zehe and Gordon 20
 TP-2002-211556), most solids and liquid water from ``nasa_condensed.yaml`` (same source), and the
 species those files lack (baking soda, aqueous salts and acids at infinite dilution, sugars,
 ethanol, citric acid) from ``thermo/data/species.yaml``, each entry with its published source.
-Everything is loaded once, on first use.
+The names are listed once, on first use;
+a species' data are read from its file the first time it is asked for (:mod:`species_files`).
 
 >>> round(molar_mass("NaHCO3(s)") * 1000, 3)
 84.006
@@ -22,7 +23,7 @@ from dataclasses import dataclass
 from functools import lru_cache
 from pathlib import Path
 
-from co2routes.thermo._lazy import cantera
+from co2routes.thermo import species_files
 from co2routes.thermo.errors import InputError
 
 DATA_FILE = Path(__file__).with_name("data") / "species.yaml"
@@ -113,47 +114,57 @@ class SpeciesInfo:
 
 @lru_cache(maxsize=1)
 def _tables() -> tuple[dict, dict]:
-    """(Cantera species by Cantera name, SpeciesInfo by user name); built once."""
-    ct = cantera()
+    """(the file of each Cantera name, user name -> (Cantera name, source)); built once, from the
+    species' names alone: a species' data are read when first asked for (:func:`_species`)."""
+    gas = species_files.read("nasa_gas.yaml")
+    condensed = species_files.read("nasa_condensed.yaml")
+    ours = species_files.read(str(DATA_FILE))
     by_ct: dict = {}
-    info: dict[str, SpeciesInfo] = {}
-
-    def add(user: str, sp, source: str) -> None:
-        data = sp.input_data
-        info[user] = SpeciesInfo(
-            name=user,
-            cantera_name=sp.name,
-            source=source,
-            t_min_k=float(sp.thermo.min_temp),
-            t_max_k=float(sp.thermo.max_temp),
-            cp_estimated=bool(data.get("cp-estimated", False)),
-            note=" ".join(str(data.get("note", "")).split()),
-        )
-
-    gas = ct.Species.list_from_file("nasa_gas.yaml")
-    condensed = ct.Species.list_from_file("nasa_condensed.yaml")
-    ours = ct.Species.list_from_file(str(DATA_FILE))
-    for sp in gas + condensed + ours:
-        by_ct[sp.name] = sp
-    condensed_names = {sp.name for sp in condensed}
-    for sp in gas:
-        if "+" in sp.name or "-" in sp.name[1:]:
+    names: dict[str, tuple[str, str]] = {}
+    for f in (gas, condensed, ours):
+        by_ct.update(dict.fromkeys(f.names, f))
+    for ct_name in gas.names:
+        if "+" in ct_name or "-" in ct_name[1:]:
             continue  # ions and charged radicals stay out of the user's list
-        add(_user_formula(sp.name) + "(g)", sp, "nasa_gas")
+        names[_user_formula(ct_name) + "(g)"] = (ct_name, "nasa_gas")
     for alias, ct_name in GAS_ISOMERS.items():
-        add(alias, by_ct[ct_name], "nasa_gas")
+        names[alias] = (ct_name, "nasa_gas")
+    condensed_names = set(condensed.names)
     for alias, ct_name in ALIASES.items():
         if ct_name in condensed_names:
-            add(alias, by_ct[ct_name], "nasa_condensed")
-    for sp in condensed:
+            names[alias] = (ct_name, "nasa_condensed")
+    for ct_name in condensed.names:
         for tag_ct, tag in (("(s)", "(s)"), ("(L)", "(l)")):
-            if sp.name.endswith(tag_ct):
-                user = _user_formula(sp.name[: -len(tag_ct)]) + tag
-                if user not in info:
-                    add(user, sp, "nasa_condensed")
-    for sp in ours:
-        add(sp.name, sp, "co2routes")
-    return by_ct, info
+            if ct_name.endswith(tag_ct):
+                user = _user_formula(ct_name[: -len(tag_ct)]) + tag
+                if user not in names:
+                    names[user] = (ct_name, "nasa_condensed")
+    for ct_name in ours.names:
+        names[ct_name] = (ct_name, "co2routes")
+    return by_ct, names
+
+
+@lru_cache(maxsize=None)
+def _species(ct_name: str):
+    """The ``cantera.Species`` of a Cantera name, read from its file on first use."""
+    return _tables()[0][ct_name].species(ct_name)
+
+
+@lru_cache(maxsize=None)
+def _info(user: str) -> SpeciesInfo:
+    """The :class:`SpeciesInfo` of a user name already in the tables."""
+    ct_name, source = _tables()[1][user]
+    sp = _species(ct_name)
+    data = sp.input_data
+    return SpeciesInfo(
+        name=user,
+        cantera_name=sp.name,
+        source=source,
+        t_min_k=float(sp.thermo.min_temp),
+        t_max_k=float(sp.thermo.max_temp),
+        cp_estimated=bool(data.get("cp-estimated", False)),
+        note=" ".join(str(data.get("note", "")).split()),
+    )
 
 
 def _user_formula(nasa: str) -> str:
@@ -215,13 +226,12 @@ def info(name: str) -> SpeciesInfo:
     >>> info("CaCO3(s)").cantera_name
     'CaCO3(caL)'
     """
-    return _tables()[1][canonical(name)]
+    return _info(canonical(name))
 
 
 def cantera_species(name: str):
     """The ``cantera.Species`` object behind a user name."""
-    by_ct, _ = _tables()
-    return by_ct[info(name).cantera_name]
+    return _species(info(name).cantera_name)
 
 
 def known_names() -> tuple[str, ...]:

@@ -112,6 +112,9 @@ class MainScreen(Filing, Working, WhatIf, Screen):
         add_use_panel(form, self.document)
         self._title()
         self.query_one("#busy").display = False
+        # the class action_pane("form") adds: set now, the first styling applies it (later, it
+        # would restyle every widget once more before the first ranking)
+        self.add_class("-editing", update=False)
         self.call_after_refresh(self.action_pane, "form")
         self.recompute(self.document, self.generation, None)
 

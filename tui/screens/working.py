@@ -58,15 +58,15 @@ class Working:
             if not worker.is_cancelled:
                 self.app.call_from_thread(self._computed, generation, result)
         finally:
-            # after the first answer (good or refused) is on screen
-            self._extras_once()
+            if not self._extras:
+                # once the first answer (good or refused) has been drawn
+                self._extras = True
+                self.app.call_from_thread(self.call_after_refresh, self._extras_once)
 
+    @work(thread=True, group="extras")
     def _extras_once(self) -> None:
         """Add the route-option and price fields to the form, once, after the first ranking is on
-        screen (mounting them takes longer than the ranking itself)."""
-        if self._extras:
-            return
-        self._extras = True
+        screen (mounting them takes longer than the ranking itself; thread worker)."""
         try:
             self._load_extras()
         except Exception as err:  # noqa: BLE001 - a broken price book or route must not stop the form
@@ -81,8 +81,13 @@ class Working:
         fields = option_fields(routes) + price_fields(self.book)
         self.app.call_from_thread(self.query_one(ScenarioForm).add_fields, fields, self.document)
 
-    @work(exclusive=True, thread=True, group="charts")
     def redraw_charts(self, outcome: Any, generation: int) -> None:
+        """Start the chart worker once the ranking is drawn (running beside the frame, it would
+        slow the frame down)."""
+        self.call_after_refresh(self._draw_charts, outcome, generation)
+
+    @work(exclusive=True, thread=True, group="charts")
+    def _draw_charts(self, outcome: Any, generation: int) -> None:
         """Work out the cost-against-batch sweep and the saturation line (thread worker)."""
         from co2routes.tui.compute import breakthrough_points, demand_sweep, saturation_curve
 

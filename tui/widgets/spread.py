@@ -16,7 +16,6 @@ from typing import Any
 
 import math
 
-import numpy as np
 from textual_plotext import PlotextPlot
 
 #: bins of the histogram
@@ -79,6 +78,8 @@ class Spread(PlotextPlot):
             plt.ylabel("samples")
             self.showing = f"histogram of {route_id}"
         else:
+            import numpy as np  # here, not at the top: the interface starts without numpy
+
             labels, boxes = [], []
             # plotext draws the first box at the bottom: the catalogue's first route goes last, on top
             for r in reversed(routes):
