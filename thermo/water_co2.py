@@ -302,15 +302,14 @@ def dew_point_in_co2(water_ppmv: float, pressure_pa: float, *, vapour: bool = Tr
     hi = MAX_TEMPERATURE_K if p <= WATER_TRIPLE_PA else min(MAX_TEMPERATURE_K, boiling_point(min(p, 22e6)) - 1e-6)
     t_d = _dew_point_fixed_point(y, p, vapour)
     t_cond = _co2_condensation_k(p)
-    if t_cond is not None and (t_d is None or t_d < t_cond) and _sat_ppmv_or_zero(t_cond + 1e-3, p, vapour) <= y:
-        # water condenses from the gas before the CO2 does: the dew point is the gas-side root
-        # (below the CO2's condensation the water it can hold jumps, and a second root lies there)
-        return _bisect_dew_point(y, p, vapour, t_cond + 1e-3, hi)
-    if t_d is not None:
+    # water condenses from the gas before the CO2 does: the dew point is the gas-side root (below
+    # the CO2's condensation the water it can hold jumps, and a second root lies there)
+    gas_side = t_cond is not None and _sat_ppmv_or_zero(t_cond + 1e-3, p, vapour) <= y
+    if t_d is not None and not (gas_side and t_d < t_cond):
         return t_d
     if saturated_water_in_co2(hi, p).water_ppmv < y:
         raise InputError("water content", "is more than CO2 holds at 100 degC at this pressure", got=y)
-    t_d = _bisect_dew_point(y, p, vapour, 160.0, hi)
+    t_d = _bisect_dew_point(y, p, vapour, t_cond + 1e-3 if gas_side else 160.0, hi)
     if abs(_sat_ppmv_or_zero(t_d, p, vapour) / y - 1.0) > 1e-3:
         # CO2 is solid at (T_d, P): no fluid CO2 to hold the water; ideal mixing (no enhancement)
         return boiling_point(y * 1e-6 * p)
@@ -416,9 +415,5 @@ def co2_condenses_first(dew_point_k: float, pressure_pa: float) -> float | None:
     >>> round(co2_condenses_first(233.15, 20e5) - 273.15, 1)
     -19.5
     """
-    from co2routes.thermo import co2
-
-    if not co2.TRIPLE_PRESSURE_PA < pressure_pa < co2.CRITICAL_PRESSURE_PA:
-        return None
-    t_sat = co2.saturation_at_pressure(pressure_pa).temperature_k
-    return t_sat if t_sat > dew_point_k else None
+    t_sat = _co2_condensation_k(pressure_pa)
+    return t_sat if t_sat is not None and t_sat > dew_point_k else None
