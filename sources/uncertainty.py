@@ -32,6 +32,7 @@ from typing import Any, Callable, Mapping, Sequence
 import numpy as np
 
 from co2routes.sources.base import Route
+from co2routes.sources.choice import demand_break
 from co2routes.sources.registry import catalogue
 from co2routes.sources.scenario import Scenario
 from co2routes.sources.guard import RouteFault, failure_line, named_in
@@ -46,8 +47,10 @@ GRID_POINTS = 9
 @dataclass(frozen=True, slots=True)
 class RouteSpread:
     """One route's sampled cost per kg: nominal, mean and percentiles, and the fraction of samples
-    in which it is the cheapest route. ``None`` throughout when a price is unknown. ``samples`` is
-    the cost per kg of every sample (for a histogram)."""
+    in which it is the cheapest route. ``None`` throughout when a price is unknown;
+    ``probability_cheapest`` alone ``None`` for a route that cannot keep up with the demand (it
+    does not contest the cheapest place, :func:`co2routes.sources.choice.demand_break`).
+    ``samples`` is the cost per kg of every sample (for a histogram)."""
 
     route_id: str
     label: str
@@ -190,7 +193,11 @@ def uncertainty(scenario: Scenario, distributions: Mapping[str, Distribution] | 
     for route, base, model, curves in plans:
         costs.append(_route_costs(model, curves, drawn, prices, book) if model.known else None)
         step()
-    known = [i for i, c in enumerate(costs) if c is not None]
+    short = [i for i, (_, base, _, _) in enumerate(plans) if demand_break(base)]
+    for i in short:
+        warnings.append(f"{plans[i][0].id}: demand not met, so not counted for the cheapest route "
+                        "(its costs are still drawn)")
+    known = [i for i, c in enumerate(costs) if c is not None and i not in short]
     cheapest = np.zeros(len(costs))
     if known:
         matrix = np.column_stack([costs[i] for i in known])
@@ -205,7 +212,7 @@ def uncertainty(scenario: Scenario, distributions: Mapping[str, Distribution] | 
             continue
         p10, p50, p90 = (float(v) for v in np.percentile(c, [10.0, 50.0, 90.0]))
         spreads.append(RouteSpread(route.id, base.label, base.cost_per_kg, float(np.mean(c)), p10, p50, p90,
-                                   float(cheapest[i]), c))
+                                   None if i in short else float(cheapest[i]), c))
     seconds_sampling = time.perf_counter() - start
     cautions: list[str] = []
     for _, base, _, _ in plans:

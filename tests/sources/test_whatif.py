@@ -208,3 +208,19 @@ def test_zero_width_equals_nominal_for_dry_ice():
     nominal = compare(s, [route]).rows[0].cost_per_kg
     r = uncertainty(s, parse_uncertain(s, routes=[route]), 50, seed=1, routes=[route]).routes[0]
     assert r.cost_per_kg_p10 == r.cost_per_kg_p90 == nominal
+
+
+def test_a_route_short_of_the_demand_does_not_contest_the_cheapest_place():
+    # The invented polytunnel demo: breath cannot keep up with 1.2 kg/day (4 people, 8 h), so its
+    # costs are drawn but it is not counted for the cheapest route; the others' chances add to 1.
+    from co2routes.sources.scenario import demo
+
+    s = demo()
+    result = uncertainty(s, parse_uncertain(s), 200, seed=5)
+    by_id = {r.route_id: r for r in result.routes}
+    assert by_id["breath"].probability_cheapest is None and by_id["breath"].cost_per_kg_p50 is not None
+    assert math.fsum(r.probability_cheapest for r in result.routes if r.probability_cheapest is not None) == \
+        pytest.approx(1.0)
+    assert any(w.startswith("breath: demand not met") for w in result.warnings)
+    record = uncertainty_record(result)
+    assert next(r for r in record["routes"] if r["id"] == "breath")["probability_cheapest"] is None

@@ -116,7 +116,7 @@ def render(answer: dict, args: argparse.Namespace) -> str:
             chart[k] = "="
         chart[a], chart[b], chart[m] = "[", "]", "|"
         lines.append(f"{r['id']:<{idw}}  {r['cost_per_kg_nominal']:>8.3f} {r['cost_per_kg_p10']:>8.3f} "
-                     f"{r['cost_per_kg_p50']:>8.3f} {r['cost_per_kg_p90']:>8.3f} {r['probability_cheapest']:>8.1%}  "
+                     f"{r['cost_per_kg_p50']:>8.3f} {r['cost_per_kg_p90']:>8.3f} {_share(r['probability_cheapest'])}  "
                      f"{''.join(chart)}")
     lines += ["", "box: [ P10, | median, ] P90"]
     lines += [f"WARNING: {w}" for w in answer["warnings"]]
@@ -148,3 +148,8 @@ def _scale(low: float, high: float, width: int) -> _Scale:
     (15, 15, True)
     """
     return _Scale(low, high, width)
+
+
+def _share(p: float | None) -> str:
+    """The chance of being cheapest, 8 wide; a dash for a route not counted (demand not met)."""
+    return f"{'-':>8}" if p is None else f"{p:>8.1%}"
