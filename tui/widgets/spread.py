@@ -84,7 +84,8 @@ class Spread(PlotextPlot):
             # plotext draws the first box at the bottom: the catalogue's first route goes last, on top
             for r in reversed(routes):
                 low, high = np.percentile(r.samples, [2.5, 97.5])
-                labels.append(f"{r.route_id[:20]} {r.probability_cheapest:.0%}")
+                share = "-" if r.probability_cheapest is None else f"{r.probability_cheapest:.0%}"
+                labels.append(f"{r.route_id[:20]} {share}")
                 boxes.append([float(high), r.cost_per_kg_p90, r.cost_per_kg_p50, r.cost_per_kg_p10, float(low)])
             plt.title("box P10..P90, | median, whiskers P2.5..P97.5")
             least, most = min(b[-1] for b in boxes), max(b[0] for b in boxes)

@@ -128,8 +128,12 @@ class SpreadPanel(VerticalScroll):
         else:
             line.append(route.label, style="bold")
             line.append(f": P10 {route.cost_per_kg_p10:.2f} · P50 {route.cost_per_kg_p50:.2f} · "
-                        f"P90 {route.cost_per_kg_p90:.2f} {cur}/kg · cheapest in ")
-            line.append(f"{route.probability_cheapest:.1%}", style="bold")
+                        f"P90 {route.cost_per_kg_p90:.2f} {cur}/kg · ")
+            if route.probability_cheapest is None:
+                line.append("not counted for the cheapest (demand not met)", style="bold yellow")
+            else:
+                line.append("cheapest in ")
+                line.append(f"{route.probability_cheapest:.1%}", style="bold")
         line.append(f"\n{result.samples} samples, seed {result.seed}; every route's box, then this route's "
                     "histogram", style="dim")
         if stale:
