@@ -233,6 +233,16 @@ class RawGas:
         """CO2 mole fraction of the raw gas (wet basis)."""
         return float(self.mole_fractions.get("CO2", 0.0))
 
+    @property
+    def dry_co2_fraction(self) -> float:
+        """CO2 mole fraction once the water is taken out (the gas after the dryer).
+
+        >>> RawGas({"CO2": 0.5, "H2O": 0.5, }, 298.15).dry_co2_fraction
+        1.0
+        """
+        water = float(self.mole_fractions.get("H2O", 0.0))
+        return min(1.0, self.co2_mole_fraction / (1.0 - water)) if water < 1.0 else 0.0
+
 
 @dataclass(frozen=True, slots=True)
 class RouteResult:

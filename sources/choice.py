@@ -177,7 +177,8 @@ def limit_breaks(result: Any, limits: Mapping[str, float], currency: str = "") -
 def demand_break(result: Any) -> tuple[str, ...]:
     """The demand itself as a limit every plan keeps: a route whose schedule cannot keep up
     (``schedule.meets_demand`` false, e.g. too few people breathing into a lime bed) breaks it
-    and is listed after the routes that can, with what it would take.
+    and is listed after the routes that can, with what it would take; so does a route whose gas
+    is too lean to condense to the liquid or dry ice asked for (``delivery.cannot_condense``).
 
     >>> from types import SimpleNamespace as S
     >>> demand_break(S(schedule=S(meets_demand=False, note="it would take 5 people")))
@@ -185,6 +186,10 @@ def demand_break(result: Any) -> tuple[str, ...]:
     >>> demand_break(S(schedule=None)), demand_break(S(schedule=S(meets_demand=True, note="")))
     ((), ())
     """
+    delivery = getattr(result, "delivery", None)
+    cannot = getattr(delivery, "cannot_condense", None)
+    if cannot:
+        return (f"demand not met (gas {cannot})",)
     schedule = getattr(result, "schedule", None)
     if schedule is None or schedule.meets_demand:
         return ()

@@ -38,6 +38,9 @@ class Delivery:
     warnings: tuple[str, ...]
     cautions: tuple[str, ...]
     notes: tuple[str, ...] = ()
+    #: why the product cannot be made from this gas (``None``: it can), see
+    #: :func:`condenser_pressure`
+    cannot_condense: str | None = None
 
     @property
     def raw_per_product(self) -> float:
@@ -100,31 +103,78 @@ _PLAN_FIELDS = {
 
 
 @lru_cache(maxsize=64)
-def _liquefy(pressure_pa: float, temperature_k: float, plan):
-    """Compression per kg from the site's state under ``plan`` (the same for every route, so
-    computed once per scenario; the batch time is the mass over ``mass_flow_kg_s``)."""
+def _liquefy(pressure_pa: float, temperature_k: float, plan, condensing_pressure_pa: float | None = None):
+    """Compression per kg from the site's state under ``plan`` (the same for every route of one
+    purity, so computed once per scenario; the batch time is the mass over ``mass_flow_kg_s``)."""
     from co2routes.thermo.compression import liquefy
 
     return liquefy(pressure_pa, temperature_k, plan.condensing_temperature_k,
                    stages=plan.stages, efficiency=plan.efficiency,
                    intercool_temperature_k=plan.intercool_temperature_k,
                    displacement_m3_s=plan.displacement_m3_s,
-                   volumetric_efficiency=plan.volumetric_efficiency)
+                   volumetric_efficiency=plan.volumetric_efficiency,
+                   condensing_pressure_pa=condensing_pressure_pa)
+
+
+#: Dry CO2 mole fraction at or above which the gas is taken as pure CO2 at the condenser.
+PURE_ENOUGH = 0.9995
+
+
+def condenser_pressure(co2_dry_fraction: float, plan) -> tuple[float | None, str | None]:
+    """The condenser's pressure for a dry gas of this CO2 fraction, and why, in words.
+
+    Pure CO2 condenses at its saturation pressure (``None`` is returned: the plan's own); a gas
+    that carries air condenses whole only at its bubble pressure
+    (:func:`co2routes.thermo.condensing.bubble_point`). A gas with no bubble point at the
+    condensing temperature gives ``(None, reason)`` with the reason starting "too lean".
+
+    >>> from co2routes.sources.scenario import DeliveryPlan
+    >>> condenser_pressure(1.0, DeliveryPlan())
+    (None, None)
+    >>> p, why = condenser_pressure(0.98, DeliveryPlan())
+    >>> round(p / 1e5, 1), why.split(":")[0]
+    (44.9, 'the dry gas is 98.0 % CO2')
+    >>> condenser_pressure(0.0077, DeliveryPlan())[1].split(":")[0]
+    'too lean to condense'
+    """
+    if co2_dry_fraction >= PURE_ENOUGH:
+        return None, None
+    from co2routes.thermo.condensing import bubble_point
+
+    t_c = plan.condensing_temperature_k
+    bp = bubble_point(round(co2_dry_fraction, 6), t_c)
+    shown = f"{co2_dry_fraction:.1%}".replace("%", " %")
+    if bp.pressure_pa is None:
+        return None, (f"too lean to condense: the dry gas is {shown} CO2, and at "
+                      f"{t_c - 273.15:.0f} degC no pressure turns it all to liquid (its air keeps "
+                      "it above the mixture's critical line); it needs another separation first")
+    return bp.pressure_pa, (f"the dry gas is {shown} CO2: with its air it condenses whole only at "
+                            f"its bubble pressure, {bp.pressure_pa / 1e5:.1f} bar at "
+                            f"{t_c - 273.15:.0f} degC (Peng-Robinson, CO2 + N2), not at pure CO2's "
+                            "saturation pressure; vent the air from the cylinder's top before use")
 
 
 def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_product: str,
-                  delivers: str, plan, site: Site) -> Delivery:
+                  delivers: str, plan, site: Site, co2_dry_fraction: float = 1.0) -> Delivery:
     """Compression (when the route hands over raw gas and the product is liquid or dry ice),
-    flash and their cautions."""
+    flash and their cautions; ``co2_dry_fraction`` is the CO2 mole fraction of the dried gas
+    (the condenser's pressure, :func:`condenser_pressure`)."""
     warnings: list[str] = []
     notes: list[str] = []
     liquefaction = None
+    cannot = None
     electricity = 0.0
     time_h = 0.0
     if end_product in ("liquid", "dry-ice") and delivers in ("raw-gas", "gas") and not (
             delivers == "gas" and end_product == "dry-ice"):
+        p_cond, why = condenser_pressure(co2_dry_fraction, plan) if delivers == "raw-gas" else (None, None)
+        if why is not None and p_cond is None:
+            cannot = why
+            warnings.append(f"The gas is {why}. Its delivery figures are those of pure CO2.")
+        elif why is not None:
+            notes.append(why[0].upper() + why[1:])
         try:
-            liquefaction = _liquefy(site.pressure_pa, site.temperature_k, plan)
+            liquefaction = _liquefy(site.pressure_pa, site.temperature_k, plan, p_cond)
         except InputError as err:
             # name the scenario's own key, as the scenario's other errors do
             field = _PLAN_FIELDS.get(err.field)
@@ -151,4 +201,4 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
     if end_product == "dry-ice":
         caution_list.append(cautions.DRY_ICE)
     return Delivery(end_product, product_kg, raw_co2_kg, liquefaction, flash, electricity, time_h,
-                    tuple(warnings), tuple(caution_list), tuple(notes))
+                    tuple(warnings), tuple(caution_list), tuple(notes), cannot)

@@ -87,7 +87,8 @@ def delivery_record(delivery: Any) -> dict[str, Any] | None:
     ``None`` when the end product is gas. Compression figures are ``None`` when the route hands
     over CO2 already condensed or solid (bought); ``work_kj_per_kg`` and
     ``heat_rejected_kj_per_kg`` are per kg of CO2 condensed, as in ``co2routes liquefy``;
-    ``raw_co2_kg_per_kg`` is kg of raw CO2 per kg of end product (flash and purchase losses).
+    ``raw_co2_kg_per_kg`` is kg of raw CO2 per kg of end product (flash and purchase losses);
+    ``cannot_condense`` says why the gas cannot be condensed (``None``: it can).
 
     >>> delivery_record(None) is None
     True
@@ -110,6 +111,7 @@ def delivery_record(delivery: Any) -> dict[str, Any] | None:
         "electricity_kwh": delivery.electricity_kwh,
         "time_h": delivery.time_h if timed else None,
         "solid_fraction": None if flash is None else flash.solid_fraction,
+        "cannot_condense": delivery.cannot_condense,
     }
 
 

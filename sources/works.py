@@ -51,7 +51,7 @@ def build(route_id: str, scenario, made: RouteResult, run: Callable[[float], Rou
 
     site, plant, period = scenario.site, scenario.plant, scenario.batch_s
     delivery = plan_delivery(product_kg, made.co2_kg, flash, scenario.end_product, made.delivers,
-                             scenario.delivery, site)
+                             scenario.delivery, site, made.raw_gas.dry_co2_fraction)
     liq = delivery.liquefaction
     flow = liq.mass_flow_kg_s if liq is not None else None
     compressors = compressors_for(made.co2_kg, period, flow) if liq is not None else 0

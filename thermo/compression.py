@@ -169,7 +169,8 @@ def minimum_stages(inlet_pressure_pa: float, outlet_pressure_pa: float,
 
 def compress_stage(index: int, suction_pressure_pa: float, suction_temperature_k: float,
                    discharge_pressure_pa: float, efficiency: float, *,
-                   cooled_temperature_k: float | None = None) -> StageResult:
+                   cooled_temperature_k: float | None = None,
+                   liquid_temperature_k: float | None = None) -> StageResult:
     """One adiabatic compression stage followed by its cooler.
 
     Equations (steady flow, per kg): ``s_2s = s_1``; ``w_s = h(P_2, s_1) - h_1``;
@@ -191,6 +192,10 @@ def compress_stage(index: int, suction_pressure_pa: float, suction_temperature_k
         Isentropic efficiency in (0, 1] [-].
     cooled_temperature_k : float or None
         Intercooler outlet temperature [K], or ``None`` for the condenser.
+    liquid_temperature_k : float or None
+        Condenser only: the liquid leaves at this temperature, below the saturation temperature
+        at ``P_2`` (a gas that carries air condenses whole only above its own saturation
+        pressure, :mod:`co2routes.thermo.condensing`): ``q = h_2 - h(P_2, T_l)``.
 
     Valid for the vapour region of CO2 from the triple point to 1100 K (Span & Wagner 1996).
 
@@ -214,7 +219,11 @@ def compress_stage(index: int, suction_pressure_pa: float, suction_temperature_k
                          "1100 K, beyond the property data (Span & Wagner 1996)", got=f"{efficiency:.0%}")
     t2 = props("T", "P", discharge_pressure_pa, "H", h2, FLUID)
     h2_state = props("H", "P", discharge_pressure_pa, "T", t2, FLUID)
-    if cooled_temperature_k is None:
+    if liquid_temperature_k is not None:
+        cooler = "condenser"
+        t_out = liquid_temperature_k
+        h_out = props("H", "P", discharge_pressure_pa, "T", t_out, FLUID)
+    elif cooled_temperature_k is None:
         cooler = "condenser"
         from co2routes.thermo.co2 import saturation_at_pressure
 

@@ -57,7 +57,7 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
             *, stages: int | None = None, efficiency: float = DEFAULT_ISENTROPIC_EFFICIENCY,
             intercool_temperature_k: float | None = None, displacement_m3_s: float | None = None,
             volumetric_efficiency: float | None = None, mass_kg: float | None = None,
-            plan: bool = True) -> LiquefactionResult:
+            plan: bool = True, condensing_pressure_pa: float | None = None) -> LiquefactionResult:
     """Compress CO2 gas in stages and condense it to saturated liquid.
 
     The condensing pressure is the saturation pressure at the condensing temperature
@@ -82,6 +82,12 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
     displacement_m3_s, volumetric_efficiency, mass_kg : float or None
         First-stage swept volume rate [m3/s], its volumetric efficiency [-] and a batch mass [kg],
         for the batch time ``t = m / m_dot``.
+    condensing_pressure_pa : float or None
+        The condenser's pressure [Pa] when it must be above the saturation pressure: a gas that
+        carries air condenses whole only at its bubble pressure
+        (:func:`co2routes.thermo.condensing.bubble_point`); the liquid then leaves subcooled at
+        the condensing temperature. The stages compress CO2's own properties (the air's share of
+        the work, a few per cent of the gas, is left out).
     plan : bool
         True (a plan): a stage ratio above :data:`MAX_STAGE_PRESSURE_RATIO` is refused. False (a
         question about a state): it is computed and carries a warning with its discharge
@@ -109,7 +115,15 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
     _check_condensing(condensing_temperature_k, "condensing temperature")
     from co2routes.thermo import co2
 
-    p_cond = _saturation(condensing_temperature_k).pressure_pa
+    p_sat = _saturation(condensing_temperature_k).pressure_pa
+    p_cond = p_sat
+    if condensing_pressure_pa is not None:
+        if not condensing_pressure_pa >= p_sat:
+            raise InputError("condensing pressure", f"must be at least the saturation pressure "
+                             f"{p_sat / 1e5:.2f} bar at {condensing_temperature_k - 273.15:.1f} degC",
+                             got=f"{condensing_pressure_pa / 1e5:.2f} bar")
+        p_cond = condensing_pressure_pa
+    t_liquid = condensing_temperature_k if p_cond > p_sat * (1.0 + 1e-6) else None
     if inlet_pressure_pa >= p_cond:
         raise InputError(
             "inlet pressure",
@@ -131,12 +145,12 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
         # Fewest stages within the ratio limit whose discharge stays under the oil limit.
         n = minimum_stages(inlet_pressure_pa, p_cond)
         results, warnings = _run_stages(inlet_pressure_pa, inlet_temperature_k, p_cond, n,
-                                        efficiency, t_ic)
+                                        efficiency, t_ic, t_liquid)
         while (n < MAX_AUTO_STAGES
                and max(s.discharge_temperature_k for s in results) > MAX_DISCHARGE_K):
             n += 1
             results, warnings = _run_stages(inlet_pressure_pa, inlet_temperature_k, p_cond, n,
-                                            efficiency, t_ic)
+                                            efficiency, t_ic, t_liquid)
     else:
         n = int(stages)
         if n < 1 or n != stages:
@@ -149,7 +163,7 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
         if ratio > MAX_STAGE_PRESSURE_RATIO and plan:
             raise InputError("stages", too_high, got=n)
         results, warnings = _run_stages(inlet_pressure_pa, inlet_temperature_k, p_cond, n,
-                                        efficiency, t_ic)
+                                        efficiency, t_ic, t_liquid)
         if ratio > MAX_STAGE_PRESSURE_RATIO:
             t_max = max(s.discharge_temperature_k for s in results)
             warnings.insert(0, f"{too_high[0].upper()}{too_high[1:]}: the discharge would reach "
@@ -189,8 +203,9 @@ def liquefy(inlet_pressure_pa: float, inlet_temperature_k: float, condensing_tem
 
 
 def _run_stages(p_first: float, t_first: float, p_cond: float, n: int, efficiency: float,
-                t_ic: float) -> tuple[list[StageResult], list[str]]:
-    """The ``n`` stages from the inlet to the condenser, with their warnings."""
+                t_ic: float, t_liquid: float | None = None) -> tuple[list[StageResult], list[str]]:
+    """The ``n`` stages from the inlet to the condenser, with their warnings (``t_liquid``: the
+    condenser's liquid leaves subcooled at this temperature, see :func:`liquefy`)."""
     warnings: list[str] = []
     ratio = (p_cond / p_first) ** (1.0 / n)
     if HIGH_STAGE_PRESSURE_RATIO < ratio <= MAX_STAGE_PRESSURE_RATIO:
@@ -209,7 +224,8 @@ def _run_stages(p_first: float, t_first: float, p_cond: float, n: int, efficienc
                 warnings.append(
                     f"Stage {i} intercooler held at {cooled - 273.15:.1f} degC, just above the dew "
                     f"point at {p_out / 1e5:.1f} bar: liquid must not reach the next stage.")
-        st = compress_stage(i, p_in, t_in, p_out, efficiency, cooled_temperature_k=cooled)
+        st = compress_stage(i, p_in, t_in, p_out, efficiency, cooled_temperature_k=cooled,
+                            liquid_temperature_k=t_liquid if i == n else None)
         if cooled is not None and cooled > st.discharge_temperature_k:
             raise InputError("intercool temperature", f"must be below stage {i}'s discharge "
                              f"temperature, {st.discharge_temperature_k - 273.15:.0f} degC: an "

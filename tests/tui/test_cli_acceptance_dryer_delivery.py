@@ -24,7 +24,7 @@ DRYER_KEYS = {"desiccant", "bed_mass_kg", "bed_volume_l", "bed_diameter_m", "bed
 DELIVERY_KEYS = {"end_product", "product_kg", "raw_co2_kg", "raw_co2_kg_per_kg",
                  "condensing_temperature_k", "condensing_pressure_pa", "stages", "work_kj_per_kg",
                  "discharge_temperature_k", "heat_rejected_kj_per_kg", "electricity_kwh", "time_h",
-                 "solid_fraction"}
+                 "solid_fraction", "cannot_condense"}
 
 
 @pytest.fixture(scope="module")

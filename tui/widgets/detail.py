@@ -210,7 +210,8 @@ def delivery(row: Any, end_product: str) -> Group:
         parts.append(Text(f"compression, storage, dry ice: {need}", style="dim"))
         return Group(*parts)
     # a step the product does not go through is left out, not shown as "unknown"
-    parts.append(facts(result, skip=tuple(f for f in ("liquefaction", "flash") if getattr(result, f, 1) is None)))
+    parts.append(facts(result, skip=tuple(f for f in ("liquefaction", "flash", "cannot_condense")
+                                          if getattr(result, f, 1) is None)))
     for f in dataclasses.fields(result) if dataclasses.is_dataclass(result) else ():
         value = getattr(result, f.name)
         if dataclasses.is_dataclass(value):
