@@ -16,7 +16,9 @@ and acentric factors are CoolProp's (Span & Wagner 1996 for CO2, Span et al. 200
 The result is scaled so that pure CO2 gives Span & Wagner's saturation pressure exactly:
 ``P_bubble = P_sat,SW(T) * P_bubble,PR(x, T) / P_sat,PR(T)``.
 
-Valid range: 220-300 K, CO2 mole fraction 0.8-1. Near the mixture's critical line (bubble
+Valid range: CO2's triple point to its critical point, CO2 mole fraction 0.8-1; within 4 % of
+GERG-2008 from -30 to 25 degC, about 10 % low near -50 degC (the interaction parameter is fitted
+above -30 degC). Near the mixture's critical line (bubble
 pressures above about 70 bar) the model may find no bubble point where GERG-2008 has one: such a
 gas is then taken as not condensable, the cautious side. Checked against the GERG-2008 mixture model (Kunz & Wagner 2012, J. Chem. Eng. Data 57, 3032;
 through CoolProp) in ``tests/thermo/test_condensing.py``.
@@ -37,8 +39,9 @@ from co2routes.thermo.errors import InputError
 #: it); published Peng-Robinson values of about -0.02 to 0 (from memory) bracket it.
 KIJ_CO2_N2 = -0.01
 
-#: Condenser temperatures the model is used for [K].
-T_MIN_K, T_MAX_K = 220.0, 300.0
+#: Condenser temperatures the model accepts [K]: CO2's triple point to its critical point (it is
+#: checked against GERG-2008 from 243 to 290 K).
+T_MIN_K, T_MAX_K = 216.592, 304.1282
 
 
 @dataclass(frozen=True, slots=True)
@@ -91,9 +94,9 @@ def _cubic_roots(c2: float, c1: float, c0: float) -> list[float]:
 
 
 def _ln_phi(x: tuple[float, float], temperature_k: float, pressure_pa: float, liquid: bool,
-            kij: float) -> tuple[float, float]:
+            kij: float) -> tuple[float, float, float]:
     """ln fugacity coefficients of CO2 and N2 in a phase of composition ``x`` (Peng & Robinson
-    1976, eq. 15, with the van der Waals mixing rule)."""
+    1976, eq. 15, with the van der Waals mixing rule), and the phase's compressibility factor."""
     a, b = _pure_ab(temperature_k)
     a12 = math.sqrt(a[0] * a[1]) * (1.0 - kij)
     aij = ((a[0], a12), (a12, a[1]))
@@ -111,7 +114,7 @@ def _ln_phi(x: tuple[float, float], temperature_k: float, pressure_pa: float, li
         share = 2.0 * (x[0] * aij[i][0] + x[1] * aij[i][1]) / am
         out.append(b[i] / bm * (z - 1.0) - math.log(z - big_b)
                    - big_a / (2.0 * s2 * big_b) * (share - b[i] / bm) * log_term)
-    return out[0], out[1]
+    return out[0], out[1], z
 
 
 def _incipient(x: tuple[float, float], temperature_k: float, pressure_pa: float,
@@ -131,12 +134,13 @@ def _incipient(x: tuple[float, float], temperature_k: float, pressure_pa: float,
         y = y_new
         if done:
             break
-    if x[1] > 0.0 and abs(y[0] - x[0]) < 1e-4:
-        return None
+    if abs(y[0] - x[0]) < 1e-4 if x[1] > 0.0 else abs(ln_l[2] - ln_v[2]) < 1e-9:
+        return None  # the same phase twice: one root of the cubic serves both
     return total, y[0]
 
 
-def _pr_bubble(co2_fraction: float, temperature_k: float, kij: float) -> tuple[float, float] | None:
+def _pr_bubble(co2_fraction: float, temperature_k: float, kij: float,
+               start_pa: float | None = None) -> tuple[float, float] | None:
     """(pressure [Pa], vapour CO2 fraction) of the Peng-Robinson bubble point, or ``None``.
 
     The lowest pressure where the first vapour's sum of K_i x_i is 1 (Michelsen & Mollerup 2007,
@@ -148,21 +152,33 @@ def _pr_bubble(co2_fraction: float, temperature_k: float, kij: float) -> tuple[f
     # below the bubble point the first vapour is richer than it can be: sum K x > 1
     # start just below the pure fluid's saturation pressure (Lee-Kesler's estimate, within a few
     # per cent here); step down while the start is already above the bubble point
-    p_lo = 0.97 * pc * 10.0 ** (7.0 / 3.0 * (1.0 + w) * (1.0 - tc / temperature_k))
+    # A mixture starts from the pure fluid's saturation pressure (``start_pa``; its bubble point
+    # lies above it): near the critical point a liquid of the mixture's composition exists only
+    # close to its bubble point, so the start creeps up until one does.
+    # The pure fluid starts from Lee & Kesler's estimate and steps down until it is below its
+    # saturation pressure (there the liquid's fugacity exceeds the vapour's: sum K x > 1).
+    p_lo = start_pa or pc * 10.0 ** (7.0 / 3.0 * (1.0 + w) * (1.0 - tc / temperature_k))
     lo = _incipient(x, temperature_k, p_lo, kij)
-    while lo is not None and lo[0] <= 1.0 and p_lo > 1e5:
-        p_lo *= 0.9
+    for _ in range(60):
+        if lo is not None and lo[0] > 1.0:
+            break
+        p_lo *= 1.005 if start_pa else 0.995
         lo = _incipient(x, temperature_k, p_lo, kij)
     if lo is None or lo[0] <= 1.0:
         return None
-    p_hi = p_lo
+    step = 1.05
     while True:
-        p_hi *= 1.05
+        p_hi = p_lo * step
         if p_hi > 2.0e7:
             return None
         hi = _incipient(x, temperature_k, p_hi, kij)
         if hi is None:
-            return None
+            # past the mixture's critical line: step shorter from the last good pressure, since
+            # near it the bubble point lies just below where one phase begins
+            if step < 1.0001:
+                return None
+            step = math.sqrt(step)
+            continue
         if hi[0] < 1.0:
             break
         p_lo, lo = p_hi, hi
@@ -183,7 +199,7 @@ def bubble_point(co2_fraction: float, temperature_k: float, kij: float = KIJ_CO2
     """The bubble point of a CO2 + air liquid with the gas's CO2 mole fraction at a temperature.
 
     See the module notes for the model and its range. Raises :class:`InputError` for a fraction
-    outside 0-1 or a temperature outside 220-300 K.
+    outside 0-1 or a temperature outside CO2's liquid range (216.6-304.1 K).
 
     >>> round(bubble_point(1.0, 273.15).pressure_pa / 1e5, 2)   # Span & Wagner: 34.85 bar
     34.85
@@ -196,8 +212,8 @@ def bubble_point(co2_fraction: float, temperature_k: float, kij: float = KIJ_CO2
     if not 0.0 < co2_fraction <= 1.0:
         raise InputError("CO2 fraction", "must be above 0 and at most 1", got=co2_fraction)
     if not T_MIN_K <= temperature_k <= T_MAX_K:
-        raise InputError("condensing temperature", f"must be from {T_MIN_K - 273.15:.0f} to "
-                         f"{T_MAX_K - 273.15:.0f} degC for a gas that carries air",
+        raise InputError("condensing temperature", f"must be from {T_MIN_K - 273.15:.1f} to "
+                         f"{T_MAX_K - 273.15:.1f} degC (CO2's triple and critical points)",
                          got=f"{temperature_k - 273.15:.1f} degC")
     from co2routes.thermo.co2 import saturation_at_temperature
 
@@ -205,7 +221,7 @@ def bubble_point(co2_fraction: float, temperature_k: float, kij: float = KIJ_CO2
     if co2_fraction == 1.0:
         return BubblePoint(1.0, temperature_k, p_sat, 1.0)
     pure = _pr_bubble(1.0, temperature_k, kij)
-    mixed = _pr_bubble(co2_fraction, temperature_k, kij)
+    mixed = None if pure is None else _pr_bubble(co2_fraction, temperature_k, kij, pure[0] * (1.0 + 1e-9))
     if pure is None or mixed is None:
         return BubblePoint(co2_fraction, temperature_k, None, None)
     return BubblePoint(co2_fraction, temperature_k, p_sat * mixed[0] / pure[0], mixed[1])

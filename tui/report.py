@@ -104,10 +104,14 @@ def delivery_words(delivery: Mapping[str, Any] | None) -> str:
     >>> delivery_words({"end_product": "dry-ice", "raw_co2_kg_per_kg": 1.0, "stages": None,
     ...                 "solid_fraction": None})
     'bought as dry ice'
+    >>> delivery_words({"end_product": "liquid", "cannot_condense": "too lean to condense: ..."})
+    'cannot be made into liquid: the gas is too lean to condense'
     """
     if delivery is None:
         return "gas as made"
     product = delivery["end_product"].replace("-", " ")
+    if delivery.get("cannot_condense"):
+        return f"cannot be made into {product}: the gas is {delivery['cannot_condense'].split(':')[0]}"
     if delivery["stages"] is None and delivery["solid_fraction"] is None:
         return f"bought as {product}"  # its purchase losses are in the feed per kg
     if delivery["stages"] is None:

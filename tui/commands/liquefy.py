@@ -19,6 +19,7 @@ _OPTION_OF = {
     "displacement": "--displacement",
     "volumetric efficiency": "--volumetric-efficiency",
     "mass": "--mass",
+    "CO2 fraction": "--co2-fraction",
 }
 
 
@@ -44,6 +45,9 @@ def add_arguments(parser: argparse.ArgumentParser) -> None:
                         help="share of the swept volume filled with gas, e.g. '80 %%' (default 80 %% "
                              "when --displacement is given)")
     parser.add_argument("--mass", metavar="M", help="batch of CO2 to liquefy, e.g. '10 kg'")
+    parser.add_argument("--co2-fraction", metavar="X", default="100 %",
+                        help="CO2 share of the dry gas, the rest air, e.g. '98 %%' (default pure): "
+                             "a gas with air condenses whole only at its bubble pressure")
 
 
 def _stages(text: str | None) -> int | None:
@@ -66,6 +70,25 @@ def _with_refrigeration(condensing_k: float, site_k: float, work_j_per_kg: float
     return {"refrigeration_work_kj_per_kg": _kj(chill), "total_work_kj_per_kg": _kj(work_j_per_kg + chill)}
 
 
+def _bubble_pressure(share: float, t_cond: float, typed: str) -> float | None:
+    """The condenser's pressure for a gas with air (``None``: pure, its saturation pressure);
+    a gas with no bubble point is refused: it cannot be condensed whole."""
+    from co2routes.sources.delivery import PURE_ENOUGH
+    from co2routes.thermo.condensing import bubble_point
+    from co2routes.thermo.errors import InputError
+
+    from co2routes.thermo.co2 import CRITICAL_TEMPERATURE_K, TRIPLE_TEMPERATURE_K
+
+    if share >= PURE_ENOUGH or not TRIPLE_TEMPERATURE_K < t_cond < CRITICAL_TEMPERATURE_K:
+        return None  # pure, or a condensing temperature liquefy itself refuses with its reason
+    bp = bubble_point(share, t_cond)
+    if bp.pressure_pa is None:
+        raise InputError("--co2-fraction", f"is too lean to condense whole at {t_cond - 273.15:.1f} degC at "
+                         "any pressure (no bubble point: the air keeps it above the mixture's critical "
+                         "line); separate the CO2 first or condense colder", got=typed)
+    return bp.pressure_pa
+
+
 def run(args: argparse.Namespace) -> dict:
     """The liquefaction plan as the JSON answer."""
     from co2routes.thermo import cautions, compression, liquefaction
@@ -84,10 +107,16 @@ def run(args: argparse.Namespace) -> dict:
     eta_v = None if args.volumetric_efficiency is None else parse(
         args.volumetric_efficiency, "--volumetric-efficiency", "fraction")
     mass = None if args.mass is None else parse_positive(args.mass, "--mass", "mass")
+    share = parse(args.co2_fraction, "--co2-fraction", "fraction")
+    if not 0.0 < share <= 1.0:
+        raise InputError("--co2-fraction", "must be a share above 0 and up to 100 %, e.g. '98 %'",
+                         got=args.co2_fraction)
     try:
+        p_bubble = _bubble_pressure(share, t_cond, args.co2_fraction)
         result = liquefaction.liquefy(p_in, t_in, t_cond, stages=stages, efficiency=eta,
                                       intercool_temperature_k=t_ic, displacement_m3_s=disp,
-                                      volumetric_efficiency=eta_v, mass_kg=mass, plan=False)
+                                      volumetric_efficiency=eta_v, mass_kg=mass, plan=False,
+                                      condensing_pressure_pa=p_bubble)
         tradeoff = liquefaction.cooling_tradeoff(
             p_in, t_in, temperatures_k=compression.TRADEOFF_TEMPERATURES_K + (t_cond,),
             stages=stages, efficiency=eta, intercool_temperature_k=t_ic)
@@ -96,6 +125,11 @@ def run(args: argparse.Namespace) -> dict:
             raise
         raise InputError(_OPTION_OF.get(err.field, err.field), err.allowed, err.got) from None
     warnings = list(result.warnings)
+    if p_bubble is not None:
+        warnings.append(f"With {1.0 - share:.1%} air the gas condenses whole only at its bubble pressure, "
+                        f"{p_bubble / 1e5:.1f} bar at {t_cond - 273.15:.1f} degC (Peng-Robinson, CO2 + N2); "
+                        "the stages are worked out on CO2's own properties, and the cooling trade-off "
+                        "below is for pure CO2. Vent the air from the cylinder's top before use.")
     if mass is not None and disp is None:
         warnings.append("The batch time needs --displacement (the compressor's swept volume rate).")
     if disp is not None and mass is None:
@@ -104,6 +138,7 @@ def run(args: argparse.Namespace) -> dict:
         "inlet_pressure_pa": result.inlet_pressure_pa,
         "inlet_temperature_k": result.inlet_temperature_k,
         "condensing_temperature_k": result.condensing_temperature_k,
+        "co2_fraction": share,
         "condensing_pressure_pa": result.condensing_pressure_pa,
         "stages": len(result.stages),
         "isentropic_efficiency": result.isentropic_efficiency,
