@@ -136,18 +136,22 @@ def condenser_pressure(co2_dry_fraction: float, plan) -> tuple[float | None, str
     (44.9, 'the dry gas is 98.0 % CO2')
     >>> condenser_pressure(0.0077, DeliveryPlan())[1].split(":")[0]
     'too lean to condense'
+    >>> condenser_pressure(0.0, DeliveryPlan())[0] is None
+    True
     """
     if co2_dry_fraction >= PURE_ENOUGH:
         return None, None
     from co2routes.thermo.condensing import bubble_point
 
     t_c = plan.condensing_temperature_k
-    bp = bubble_point(round(co2_dry_fraction, 6), t_c)
+    share = round(co2_dry_fraction, 6)
+    bp = bubble_point(share, t_c) if share > 0.0 else None
     shown = f"{co2_dry_fraction:.1%}".replace("%", " %")
-    if bp.pressure_pa is None:
+    if bp is None or bp.pressure_pa is None:
+        remedy = "condense colder or separate the CO2 first" if share >= 0.5 else "separate the CO2 first"
         return None, (f"too lean to condense: the dry gas is {shown} CO2, and at "
                       f"{t_c - 273.15:.0f} degC no pressure turns it all to liquid (its air keeps "
-                      "it above the mixture's critical line); it needs another separation first")
+                      f"it above the mixture's critical line); {remedy}")
     return bp.pressure_pa, (f"the dry gas is {shown} CO2: with its air it condenses whole only at "
                             f"its bubble pressure, {bp.pressure_pa / 1e5:.1f} bar at "
                             f"{t_c - 273.15:.0f} degC (Peng-Robinson, CO2 + N2), not at pure CO2's "
@@ -167,13 +171,8 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
     time_h = 0.0
     if end_product in ("liquid", "dry-ice") and delivers in ("raw-gas", "gas") and not (
             delivers == "gas" and end_product == "dry-ice"):
-        p_cond, why = condenser_pressure(co2_dry_fraction, plan) if delivers == "raw-gas" else (None, None)
-        if why is not None and p_cond is None:
-            cannot = why
-            warnings.append(f"The gas is {why}. Its delivery figures are those of pure CO2.")
-        elif why is not None:
-            notes.append(why[0].upper() + why[1:])
         try:
+            p_cond, why = condenser_pressure(co2_dry_fraction, plan) if delivers == "raw-gas" else (None, None)
             liquefaction = _liquefy(site.pressure_pa, site.temperature_k, plan, p_cond)
         except InputError as err:
             # name the scenario's own key, as the scenario's other errors do
@@ -181,6 +180,11 @@ def plan_delivery(product_kg: float, raw_co2_kg: float, flash: Any | None, end_p
             if field is None:
                 raise
             raise InputError(field, err.allowed, got=err.got) from None
+        if why is not None and p_cond is None:
+            cannot = why
+            warnings.append(f"The gas is {why}. Its delivery figures are those of pure CO2.")
+        elif why is not None:
+            notes.append(why[0].upper() + why[1:])
         electricity = liquefaction.work_j_per_kg * raw_co2_kg / MOTOR_EFFICIENCY / 3.6e6
         if liquefaction.mass_flow_kg_s:
             time_h = raw_co2_kg / liquefaction.mass_flow_kg_s / 3600.0
